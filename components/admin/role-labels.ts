@@ -1,0 +1,6 @@
+export const ROLE_LABELS = {
+  reader: "Reader",
+  contributor: "Contributor",
+  editor: "Editor",
+  admin: "Admin",
+} as const;

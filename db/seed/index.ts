@@ -1,0 +1,65 @@
+// Seeds the demo scenario idempotently: anything already present (by e-mail or name) is left alone.
+import { eq } from "drizzle-orm";
+import { drizzle } from "drizzle-orm/mysql2";
+import mysql from "mysql2/promise";
+import { DEMO_PASSWORD, hashPassword } from "../../lib/auth/passwords";
+import * as schema from "../schema";
+import { DEMO_ACCOUNTS, DEMO_COLLECTIONS } from "./scenario";
+
+const url = process.env.DATABASE_URL;
+if (!url) throw new Error("DATABASE_URL is not set");
+const password = DEMO_PASSWORD;
+if (process.env.CORDARIUM_ENV === "production") {
+  console.error("Refusing to seed demo accounts with a known password in production.");
+  process.exit(1);
+}
+
+const connection = await mysql.createConnection({ uri: url, timezone: "Z" });
+const db = drizzle(connection, { schema, mode: "default" });
+
+try {
+  const passwordHash = await hashPassword(password);
+  let admin: number | null = null;
+  for (const account of DEMO_ACCOUNTS) {
+    const [existing] = await db.select({ id: schema.users.id }).from(schema.users).where(eq(schema.users.email, account.email));
+    let id = existing?.id;
+    if (!id) {
+      await db.transaction(async (tx) => {
+        [{ id }] = await tx
+          .insert(schema.users)
+          .values({ ...account, passwordHash, emailVerifiedAt: new Date() })
+          .$returningId();
+        await tx.insert(schema.auditEvents).values({
+          actorId: null,
+          action: "user.seeded",
+          entityType: "user",
+          entityId: String(id),
+          after: { id, email: account.email, name: account.name, role: account.role },
+        });
+      });
+      console.log(`  account ${account.email} (${account.role})`);
+    }
+    if (account.role === "admin") admin = id!;
+  }
+  for (const collection of DEMO_COLLECTIONS) {
+    const [existing] = await db
+      .select({ id: schema.collections.id })
+      .from(schema.collections)
+      .where(eq(schema.collections.name, collection.name));
+    if (existing) continue;
+    await db.transaction(async (tx) => {
+      const [{ id }] = await tx.insert(schema.collections).values({ ...collection, createdBy: admin }).$returningId();
+      await tx.insert(schema.auditEvents).values({
+        actorId: admin,
+        action: "collection.seeded",
+        entityType: "collection",
+        entityId: String(id),
+        after: { id, ...collection },
+      });
+    });
+    console.log(`  collection ${collection.name}`);
+  }
+  console.log("demo scenario ready");
+} finally {
+  await connection.end();
+}

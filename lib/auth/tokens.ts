@@ -1,0 +1,12 @@
+import "server-only";
+import { createHash, randomBytes } from "node:crypto";
+
+// E-mailed tokens: 256 random bits for the link, only their SHA-256 in the database.
+export function newToken(): { token: string; hash: string } {
+  const token = randomBytes(32).toString("base64url");
+  return { token, hash: hashToken(token) };
+}
+
+export function hashToken(token: string): string {
+  return createHash("sha256").update(token).digest("hex");
+}
