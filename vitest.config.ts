@@ -17,7 +17,7 @@ export default defineConfig({
           name: "integration",
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
-          // Integration tests share one database and one set of fakes.
+          // Integration tests share one database, one app and one set of fakes.
           fileParallelism: false,
           testTimeout: 30_000,
           hookTimeout: 60_000,

@@ -136,7 +136,7 @@ export function UsersTable({ selfId }: { selfId: number }) {
           <input type="search" defaultValue={state.q} className={inputClass} onChange={(e) => setState({ q: e.target.value })} />
         </label>
         <label className="flex flex-col gap-1 text-sm font-semibold text-ink-soft">
-          Role
+          Show role
           <select value={state.role} className={inputClass} onChange={(e) => setState({ role: e.target.value })}>
             <option value="">Any role</option>
             {Object.entries(ROLE_LABELS).map(([value, label]) => (
@@ -147,7 +147,7 @@ export function UsersTable({ selfId }: { selfId: number }) {
           </select>
         </label>
         <label className="flex flex-col gap-1 text-sm font-semibold text-ink-soft">
-          Status
+          Show status
           <select value={state.status} className={inputClass} onChange={(e) => setState({ status: e.target.value })}>
             <option value="">Active and disabled</option>
             <option value="active">Active</option>
