@@ -11,6 +11,7 @@ import "./globals.css";
 export const metadata: Metadata = {
   title: { default: "Cordarium", template: "%s · Cordarium" },
   description: "An archive of visual evidence for historical performance practice on plucked instruments.",
+  icons: { icon: "/favicon.svg" },
 };
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1 };

@@ -1,7 +1,7 @@
 // Admins manage accounts: invitations carry a role, role changes and disabling take effect at once,
 // stale edits are refused with 409, and every change lands in the audit trail.
 import { beforeAll, describe, expect, it } from "vitest";
-import { call, DEMO, invitedUser, sessionOf, signedIn, signIn, type Jar } from "../support/app";
+import { call, countMail, DEMO, invitedUser, requestSignInLink, sessionOf, signedIn, signIn, type Jar } from "../support/app";
 
 type UserRow = { id: number; email: string; role: string; disabledAt: string | null; version: number };
 
@@ -69,6 +69,11 @@ describe("role changes and disabled accounts", () => {
     await new Promise((r) => setTimeout(r, 3200));
     expect((await call("/api/admin/invitations", { jar, json: {} })).status).toBe(401);
     expect((await signIn(user.email, user.password)).error).toMatch(/disabled/);
+    // Nor by e-mail link: none is sent.
+    const before = await countMail(user.email);
+    expect((await requestSignInLink(user.email)).status).toBe(200);
+    await new Promise((r) => setTimeout(r, 400));
+    expect(await countMail(user.email)).toBe(before);
 
     const back = await userByEmail(user.email);
     await call(`/api/admin/users/${row.id}`, { jar: admin, method: "PATCH", json: { version: back.version, disabled: false } });
