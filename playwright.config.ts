@@ -9,7 +9,7 @@ export default defineConfig({
   timeout: 30_000,
   expect: { timeout: 7_000 },
   reporter: "list",
-  outputDir: ".data/test/playwright-results",
+  outputDir: process.env.PLAYWRIGHT_OUTPUT_DIR ?? ".data/test/playwright-results",
   use: {
     baseURL: process.env.TEST_APP_URL ?? "http://localhost:3100",
     browserName: "chromium",

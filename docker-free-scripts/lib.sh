@@ -160,6 +160,11 @@ run_migrations() {
   node --import tsx db/migrate.ts >>"$LOGS/migrate.log" 2>&1 || { tail -20 "$LOGS/migrate.log" >&2; die "migrations failed"; }
 }
 
+load_gazetteer() {
+  log "loading the offline gazetteer (once)"
+  node --import tsx db/gazetteer.ts >>"$LOGS/gazetteer.log" 2>&1 || { tail -20 "$LOGS/gazetteer.log" >&2; die "loading the gazetteer failed"; }
+}
+
 seed_demo() {
   log "seeding the demo scenario (skipped where already present)"
   node --import tsx db/seed/index.ts 2>&1 | tee -a "$LOGS/seed.log" >&2 || die "seeding failed; see $LOGS/seed.log"

@@ -26,6 +26,10 @@ const schema = z.object({
   NEXTAUTH_URL: z.string().url().optional(),
   NEXTAUTH_SECRET: z.string().min(16),
 
+  // How far approximate (~) and uncertain (?) dates are widened for date-overlap queries, in years.
+  DATING_APPROXIMATE_MARGIN_YEARS: z.coerce.number().int().min(0).max(100).default(5),
+  DATING_UNCERTAIN_MARGIN_YEARS: z.coerce.number().int().min(0).max(100).default(5),
+
   SIGN_IN_MAX_FAILURES_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
   SIGN_IN_MAX_FAILURES_PER_ADDRESS: z.coerce.number().int().min(1).default(30),
 });
@@ -49,4 +53,11 @@ export function config(): Config {
 /** The public base URL of the app, for links in e-mails. */
 export function appUrl(): string {
   return (config().NEXTAUTH_URL ?? `http://localhost:${process.env.PORT ?? 3000}`).replace(/\/$/, "");
+}
+
+export function datingMargins() {
+  return {
+    approximateMarginYears: config().DATING_APPROXIMATE_MARGIN_YEARS,
+    uncertainMarginYears: config().DATING_UNCERTAIN_MARGIN_YEARS,
+  };
 }

@@ -13,6 +13,11 @@ export default async function ArchivePage() {
         title="The archive"
         lead="Paintings, drawings, prints and carvings that show early guitars, lutes, vihuelas, citterns and theorbos being played, with the evidence in each marked, dated, placed and checked by a second pair of eyes."
       />
+      <p className="mb-8">
+        <Link href="/sources" className="rounded bg-accent px-4 py-2 font-semibold text-white no-underline hover:bg-accent-deep">
+          Browse the sources
+        </Link>
+      </p>
       <section aria-labelledby="collections-heading">
         <h2 id="collections-heading" className="mb-3 text-2xl">
           Holding collections
@@ -23,7 +28,9 @@ export default async function ArchivePage() {
           <ul className="grid gap-4 sm:grid-cols-2">
             {collections.map((c) => (
               <li key={c.id} className="rounded border border-rule bg-card p-4">
-                <p className="font-serif text-xl">{c.name}</p>
+                <Link href={`/collections/${c.id}`} className="font-serif text-xl font-semibold">
+                  {c.name}
+                </Link>
                 <p className="text-sm text-ink-soft">
                   {[c.city, c.countryCode].filter(Boolean).join(", ")}
                   {c.countryCode && <span className="ml-2 font-mono text-xs text-ink-faint">{c.countryCode}</span>}

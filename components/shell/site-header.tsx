@@ -6,6 +6,9 @@ import { NavLink } from "./nav-link";
 export function SiteHeader({ actor, devMail }: { actor: Actor | null; devMail: boolean }) {
   const links = [
     { href: "/", label: "Archive" },
+    { href: "/sources", label: "Sources" },
+    { href: "/collections", label: "Collections" },
+    { href: "/places", label: "Places" },
     ...(can(actor, "user.manage") ? [{ href: "/admin/users", label: "Users" }] : []),
     ...(can(actor, "audit.read") ? [{ href: "/admin/audit", label: "Audit trail" }] : []),
     ...(devMail ? [{ href: "/dev/mail", label: "Mailbox" }] : []),

@@ -4,3 +4,5 @@ export * from "./account-tokens";
 export * from "./audit-events";
 export * from "./sign-in-limits";
 export * from "./collections";
+export * from "./places";
+export * from "./sources";

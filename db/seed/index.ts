@@ -4,6 +4,8 @@ import { drizzle } from "drizzle-orm/mysql2";
 import mysql from "mysql2/promise";
 import { DEMO_PASSWORD, hashPassword } from "../../lib/auth/passwords";
 import * as schema from "../schema";
+import { seedAreas } from "./areas";
+import { seedSources } from "./sources";
 import { DEMO_ACCOUNTS, DEMO_COLLECTIONS } from "./scenario";
 
 const url = process.env.DATABASE_URL;
@@ -59,6 +61,10 @@ try {
     });
     console.log(`  collection ${collection.name}`);
   }
+  // Historical areas after the accounts: the admin is their author.
+  await seedAreas(db, admin);
+  const [contributor] = await db.select({ id: schema.users.id }).from(schema.users).where(eq(schema.users.email, "contributor@cordarium.test"));
+  await seedSources(db, contributor.id);
   console.log("demo scenario ready");
 } finally {
   await connection.end();

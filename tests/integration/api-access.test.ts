@@ -18,6 +18,14 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/admin/users/[id]": { PATCH: "admin" },
   "/api/admin/invitations": { POST: "admin" },
   "/api/admin/audit": { GET: "admin" },
+  "/api/places": { GET: "public", POST: "editor" },
+  "/api/places/[id]": { GET: "public", PATCH: "editor" },
+  "/api/collections": { GET: "public", POST: "contributor" },
+  "/api/collections/[id]": { GET: "public", PATCH: "contributor" },
+  "/api/sources": { GET: "public", POST: "contributor" },
+  "/api/sources/[id]": { GET: "public", PATCH: "contributor", DELETE: "admin" },
+  "/api/sources/[id]/restore": { POST: "admin" },
+  "/api/sources/[id]/history": { GET: "public" },
 };
 
 const ROLES = ["reader", "contributor", "editor", "admin"] as const;

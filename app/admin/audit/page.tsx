@@ -2,23 +2,21 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
 import { PageTitle } from "@/components/ui/page-title";
+import { changedFields } from "@/lib/audit/diff";
 import { auditQuerySchema, listAuditEvents } from "@/lib/audit/queries";
+import { can } from "@/lib/auth/policy";
 import { currentActor } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Audit trail" };
-
-// The fields that changed between two records, for a one-line summary.
-function changedFields(before: unknown, after: unknown): string[] {
-  const b = (before ?? {}) as Record<string, unknown>;
-  const a = (after ?? {}) as Record<string, unknown>;
-  return [...new Set([...Object.keys(b), ...Object.keys(a)])].filter((k) => JSON.stringify(b[k]) !== JSON.stringify(a[k]) && k !== "version");
-}
 
 export default async function AuditPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   const raw = await searchParams;
   const parsed = auditQuerySchema.safeParse(raw);
   const query = parsed.success ? parsed.data : auditQuerySchema.parse({});
-  const { events, nextBefore } = await listAuditEvents(await currentActor(), query);
+  const actor = await currentActor();
+  // The layout refuses non-admins, but pages render alongside their layout, not after it.
+  if (!can(actor, "audit.read")) return null;
+  const { events, nextBefore } = await listAuditEvents(actor, query);
   const filterQuery = (extra: Record<string, string | number>) =>
     `?${new URLSearchParams(Object.entries({ ...(query.entityType ? { entityType: query.entityType } : {}), ...extra }).map(([k, v]) => [k, String(v)])).toString()}`;
 
