@@ -26,7 +26,8 @@ export async function createCollection(actor: Actor | null, fields: CollectionFi
 }
 
 export async function updateCollection(actor: Actor | null, id: number, change: CollectionFields & { version: number }) {
-  authorize(actor, "collection.create");
+  // The role first; ownership once the row is read.
+  authorize(actor, "collection.edit");
   const { version, ...fields } = change;
   return db().transaction(async (tx) => {
     const [before] = await tx.select().from(collections).where(eq(collections.id, id)).for("update");

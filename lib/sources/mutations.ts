@@ -65,7 +65,8 @@ function checkVersion(row: Row, version: number) {
 }
 
 export async function updateSource(actor: Actor | null, id: number, change: SourceUpdate): Promise<Row> {
-  authorize(actor, "source.create");
+  // The role first; ownership once the row is read.
+  authorize(actor, "source.edit");
   const { version, ...fields } = change;
   return db().transaction(async (tx) => {
     const before = await lockForChange(tx, id);

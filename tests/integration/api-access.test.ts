@@ -26,6 +26,9 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/sources/[id]": { GET: "public", PATCH: "contributor", DELETE: "admin" },
   "/api/sources/[id]/restore": { POST: "admin" },
   "/api/sources/[id]/history": { GET: "public" },
+  "/api/sources/import/template": { GET: "public" },
+  "/api/sources/import/preview": { POST: "contributor" },
+  "/api/sources/import/commit": { POST: "contributor" },
 };
 
 const ROLES = ["reader", "contributor", "editor", "admin"] as const;

@@ -10,6 +10,6 @@ const idSchema = z.coerce.number().int().positive();
 
 export const GET = route<{ id: string }>("archive.read", async ({ actor, params }) => ({ collection: await getCollection(actor, idSchema.parse(params.id)) }));
 
-export const PATCH = route<{ id: string }>("collection.create", async ({ req, actor, params }) => ({
+export const PATCH = route<{ id: string }>("collection.edit", async ({ req, actor, params }) => ({
   collection: await updateCollection(actor, idSchema.parse(params.id), await readJson(req, collectionUpdateSchema)),
 }));

@@ -11,7 +11,7 @@ const versionSchema = z.object({ version: z.number().int().positive() });
 
 export const GET = route<{ id: string }>("archive.read", async ({ actor, params }) => ({ source: await getSource(actor, idSchema.parse(params.id)) }));
 
-export const PATCH = route<{ id: string }>("source.create", async ({ req, actor, params }) => ({
+export const PATCH = route<{ id: string }>("source.edit", async ({ req, actor, params }) => ({
   source: await updateSource(actor, idSchema.parse(params.id), await readJson(req, sourceUpdateSchema)),
 }));
 
