@@ -40,6 +40,7 @@ test("the demo reader signs in by a link from the mailbox", async ({ page }) => 
 test("a forgotten password can be reset from the e-mailed link", async ({ page }) => {
   await page.goto("/sign-in");
   await page.getByRole("link", { name: "Forgotten your password?" }).click();
+  await expect(page.getByRole("heading", { name: "Forgotten password" })).toBeVisible();
   await page.getByLabel("E-mail address").fill("contributor@cordarium.test");
   await page.getByRole("button", { name: "Send me a reset link" }).click();
   await expect(page.getByRole("main").getByRole("status")).toContainText("is on its way");
