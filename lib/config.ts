@@ -30,6 +30,14 @@ const schema = z.object({
   DATING_APPROXIMATE_MARGIN_YEARS: z.coerce.number().int().min(0).max(100).default(5),
   DATING_UNCERTAIN_MARGIN_YEARS: z.coerce.number().int().min(0).max(100).default(5),
 
+  // Uploads: the largest file and the most pixels an image may decode to (a guard against decompression bombs).
+  IMAGE_MAX_BYTES: z.coerce.number().int().min(1024).default(300 * 1024 * 1024),
+  IMAGE_MAX_PIXELS: z.coerce.number().int().min(1_000_000).default(250_000_000),
+  // Perceptual-hash distance (of 64 bits) at or below which an upload is flagged as a likely other photograph.
+  IMAGE_NEAR_DUPLICATE_DISTANCE: z.coerce.number().int().min(0).max(32).default(10),
+  // "off" keeps this instance from processing queued jobs (e.g. a web-only instance).
+  CORDARIUM_WORKER: z.enum(["on", "off"]).default("on"),
+
   SIGN_IN_MAX_FAILURES_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
   SIGN_IN_MAX_FAILURES_PER_ADDRESS: z.coerce.number().int().min(1).default(30),
 });

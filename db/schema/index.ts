@@ -6,3 +6,5 @@ export * from "./sign-in-limits";
 export * from "./collections";
 export * from "./places";
 export * from "./sources";
+export * from "./images";
+export * from "./jobs";

@@ -12,7 +12,7 @@ export type AuditEntry = {
 };
 
 // Secrets never enter the audit trail, whatever record is logged.
-const SECRET_FIELDS = new Set(["passwordHash", "tokenHash", "token"]);
+const SECRET_FIELDS = new Set(["passwordHash", "tokenHash", "token", "storageKey", "multipartUploadId"]);
 
 function scrub(value: unknown): unknown {
   if (value === null || value === undefined || typeof value !== "object" || value instanceof Date) return value ?? null;
