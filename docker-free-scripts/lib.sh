@@ -34,7 +34,7 @@ use_profile() {
   export PORT="$APP_PORT" NEXTAUTH_URL="http://localhost:$APP_PORT"
   export NEXT_DIST_DIR=".next-$PROFILE"
   # The tests prove the size limit with files of tens of megabytes, not hundreds.
-  if [ "$PROFILE" = test ]; then export IMAGE_MAX_BYTES=$((32 * 1024 * 1024)); fi
+  if [ "$PROFILE" = test ]; then export IMAGE_MAX_BYTES=$((32 * 1024 * 1024)) CORDARIUM_SEED_IMAGES=0; fi
   if [ ! -s "$DATA/auth-secret" ]; then
     node -e 'process.stdout.write(require("crypto").randomBytes(32).toString("base64url"))' >"$DATA/auth-secret"
   fi

@@ -5,6 +5,7 @@ import mysql from "mysql2/promise";
 import { DEMO_PASSWORD, hashPassword } from "../../lib/auth/passwords";
 import * as schema from "../schema";
 import { seedAreas } from "./areas";
+import { seedDemoImages } from "./demo-images";
 import { seedSources } from "./sources";
 import { DEMO_ACCOUNTS, DEMO_COLLECTIONS } from "./scenario";
 
@@ -65,6 +66,8 @@ try {
   await seedAreas(db, admin);
   const [contributor] = await db.select({ id: schema.users.id }).from(schema.users).where(eq(schema.users.email, "contributor@cordarium.test"));
   await seedSources(db, contributor.id);
+  // The tests make their own images; drawing ten large pictures would only slow every run.
+  if (process.env.CORDARIUM_SEED_IMAGES !== "0") await seedDemoImages(db, contributor.id);
   console.log("demo scenario ready");
 } finally {
   await connection.end();

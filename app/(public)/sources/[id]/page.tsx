@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { SourceImages } from "@/components/images/source-images";
 import { SourceAdminActions } from "@/components/sources/source-admin-actions";
 import { SourceHistory } from "@/components/sources/source-history";
 import { Notice } from "@/components/ui/notice";
@@ -68,6 +69,7 @@ export default async function SourcePage({ params }: Props) {
         </div>
       </header>
       {source.deletedAt && <Notice tone="warn">This source was deleted on {source.deletedAt.toISOString().slice(0, 10)}. Only administrators see it; they can restore it.</Notice>}
+      <SourceImages sourceId={source.id} canUpload={mayEdit && can(actor, "image.upload", { ownerId: source.createdBy })} canReprocess={can(actor, "image.reprocess")} />
       <dl className="mb-8">
         <Field label="Date">
           {dating?.ok ? (

@@ -1,7 +1,7 @@
 export default function Loading() {
   return (
     <div role="status" aria-live="polite" className="py-12 text-center text-ink-soft">
-      Fetching from the archive…
+      Fetching the records…
     </div>
   );
 }
