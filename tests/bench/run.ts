@@ -1,5 +1,7 @@
 // `npm run bench`: times listSources (lib/sources/queries.ts) over 100,000 invented sources in a MariaDB
-// of its own, records the query plans, and writes tests/bench/results/sources-list.{json,md}.
+// of its own, records the query plans, and writes tests/bench/results/sources-list.{json,md}; then the
+// image pipeline against vips dzsave (tests/bench/images/, results in images.{json,md}).
+// `npm run bench -- sources` or `npm run bench -- images` runs one part only.
 // A measurement, not a test: nothing here fails on timing.
 import { register } from "node:module";
 import os from "node:os";
@@ -234,7 +236,21 @@ export type Report = {
   runMs: number;
 };
 
-main().catch((error: unknown) => {
+const PARTS = ["sources", "images"] as const;
+const asked = process.argv.slice(2);
+const unknown = asked.filter((a) => !(PARTS as readonly string[]).includes(a));
+if (unknown.length) {
+  console.error(`bench: unknown part ${unknown.join(", ")}; use ${PARTS.join(" or ")} (or nothing, for both)`);
+  process.exit(2);
+}
+const wanted = (part: (typeof PARTS)[number]) => asked.length === 0 || asked.includes(part);
+
+async function parts() {
+  if (wanted("sources")) await main();
+  if (wanted("images") && !process.exitCode) await (await import("./images/run")).runImagesBench();
+}
+
+parts().catch((error: unknown) => {
   // After Ctrl-C the statements in flight fail with "connection lost": that is the interruption, not news.
   if (!interrupted) console.error(error);
   process.exitCode = 1;
