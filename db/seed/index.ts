@@ -5,7 +5,6 @@ import mysql from "mysql2/promise";
 import { DEMO_PASSWORD, hashPassword } from "../../lib/auth/passwords";
 import * as schema from "../schema";
 import { seedAreas } from "./areas";
-import { seedDemoImages } from "./demo-images";
 import { seedSources } from "./sources";
 import { DEMO_ACCOUNTS, DEMO_COLLECTIONS } from "./scenario";
 
@@ -67,7 +66,11 @@ try {
   const [contributor] = await db.select({ id: schema.users.id }).from(schema.users).where(eq(schema.users.email, "contributor@cordarium.test"));
   await seedSources(db, contributor.id);
   // The tests make their own images; drawing ten large pictures would only slow every run.
-  if (process.env.CORDARIUM_SEED_IMAGES !== "0") await seedDemoImages(db, contributor.id);
+  if (process.env.CORDARIUM_SEED_IMAGES !== "0") {
+    // Loaded only when needed: the drawing code is large.
+    const { seedDemoImages } = await import("./demo-images");
+    await seedDemoImages(db, contributor.id);
+  }
   console.log("demo scenario ready");
 } finally {
   await connection.end();
