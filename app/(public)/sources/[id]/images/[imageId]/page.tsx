@@ -40,6 +40,7 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
 export default async function ImageViewerPage({ params }: Props) {
   const { image, source, ready } = await load(await params);
   const shown = toSourceImage(image);
+  const position = ready.findIndex((i) => i.id === image.id);
   const others = ready.map(({ id, sourceId, caption, originalFilename }) => ({ id, sourceId, caption, originalFilename }));
 
   return (
@@ -48,7 +49,9 @@ export default async function ImageViewerPage({ params }: Props) {
         <Link href={`/sources/${source.id}`}>← Back to “{source.title}”</Link>
       </p>
       <header className="mb-4 border-b border-rule pb-3">
-        <p className="text-sm uppercase tracking-wider text-ink-faint">Photograph {image.id} of</p>
+        <p className="text-sm uppercase tracking-wider text-ink-faint">
+          {position >= 0 ? `Photograph ${position + 1} of ${ready.length} of the source` : "A photograph of the source"}
+        </p>
         <h1 className="text-3xl">{source.title}</h1>
         <p className="mt-1 text-lg text-ink-soft">{imageName(image)}</p>
       </header>
