@@ -1,12 +1,13 @@
 "use client";
 
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { flexRender, getCoreRowModel, useReactTable, type ColumnDef, type SortingState } from "@tanstack/react-table";
+import { getCoreRowModel, useReactTable, type ColumnDef, type SortingState } from "@tanstack/react-table";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { ServerTable } from "@/components/ui/server-table";
 import { api, ApiError } from "@/lib/client/api";
 import { ROLE_LABELS } from "./role-labels";
 
@@ -159,51 +160,15 @@ export function UsersTable({ selfId }: { selfId: number }) {
         {message && <Notice tone={message.tone}>{message.text}</Notice>}
         {query.error && <Notice tone="warn">{query.error.message}</Notice>}
       </div>
-      <div className="overflow-x-auto rounded border border-rule bg-card">
-        <table className="w-full min-w-[720px] text-left text-sm">
-          <thead className="border-b border-rule bg-paper-deep">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const id = header.column.id;
-                  const sortable = SORTABLE.has(id);
-                  const active = state.sort === id;
-                  return (
-                    <th key={header.id} scope="col" className="px-3 py-2 font-semibold" aria-sort={active ? (state.dir === "asc" ? "ascending" : "descending") : undefined}>
-                      {sortable ? (
-                        <button type="button" className="font-semibold hover:underline" onClick={() => setState({ sort: id, dir: active && state.dir === "asc" ? "desc" : "asc" })}>
-                          {flexRender(header.column.columnDef.header, header.getContext())}
-                          <span aria-hidden="true">{active ? (state.dir === "asc" ? " ▲" : " ▼") : ""}</span>
-                        </button>
-                      ) : (
-                        flexRender(header.column.columnDef.header, header.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-b border-rule last:border-0">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2 align-middle">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-            {data && data.users.length === 0 && (
-              <tr>
-                <td colSpan={columns.length} className="px-3 py-8 text-center text-ink-soft">
-                  No account matches these filters.
-                </td>
-              </tr>
-            )}
-          </tbody>
-        </table>
-      </div>
+      <ServerTable
+        table={table}
+        sortKeyOf={(id) => (SORTABLE.has(id) ? id : undefined)}
+        sort={state.sort}
+        dir={state.dir}
+        onSort={(sort, dir) => setState({ sort, dir })}
+        empty={data && data.users.length === 0 ? "No account matches these filters." : null}
+        minWidth="720px"
+      />
       <div className="mt-3 flex flex-wrap items-center justify-between gap-3 text-sm">
         <span className="text-ink-soft">{data ? `${data.total} account${data.total === 1 ? "" : "s"}` : query.isLoading ? "Loading accounts…" : ""}</span>
         <div className="flex items-center gap-2">

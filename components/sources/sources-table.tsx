@@ -1,12 +1,13 @@
 "use client";
 
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import { flexRender, getCoreRowModel, useReactTable, type ColumnDef } from "@tanstack/react-table";
+import { getCoreRowModel, useReactTable, type ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { ServerTable } from "@/components/ui/server-table";
 import { api } from "@/lib/client/api";
 import { attributionInWords, OBJECT_TYPE_LABELS, type AttributionQualifier, type ObjectType } from "@/lib/sources/vocab";
 import { SourcesFilters, type FilterOptions } from "./sources-filters";
@@ -122,50 +123,16 @@ export function SourcesTable({ options }: { options: FilterOptions }) {
       <div aria-live="polite" className="my-3 text-sm text-ink-soft">
         {query.error ? <Notice tone="warn">{query.error.message}</Notice> : data ? `${data.total} source${data.total === 1 ? "" : "s"}` : "Fetching sources…"}
       </div>
-      <div className="overflow-x-auto rounded border border-rule bg-card">
-        <table className="w-full min-w-[760px] text-left text-sm">
-          <thead className="border-b border-rule bg-paper-deep">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sortKey = SORTS[header.column.id];
-                  const active = sortKey === sort;
-                  return (
-                    <th key={header.id} scope="col" className="px-3 py-2 font-semibold" aria-sort={active ? (dir === "asc" ? "ascending" : "descending") : undefined}>
-                      {sortKey ? (
-                        <button type="button" className="font-semibold hover:underline" onClick={() => setParams({ sort: sortKey, dir: active && dir === "asc" ? "desc" : "asc" })}>
-                          {flexRender(header.column.columnDef.header, header.getContext())}
-                          <span aria-hidden="true">{active ? (dir === "asc" ? " ▲" : " ▼") : ""}</span>
-                        </button>
-                      ) : (
-                        flexRender(header.column.columnDef.header, header.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-b border-rule align-top last:border-0">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-            {data && data.sources.length === 0 && (
-              <tr>
-                <td colSpan={columns.length} className="px-3 py-10 text-center text-ink-soft">
-                  No source matches these filters.
-                </td>
-              </tr>
-            )}
-          </tbody>
-        </table>
-      </div>
+      <ServerTable
+        table={table}
+        sortKeyOf={(id) => SORTS[id]}
+        sort={sort}
+        dir={dir}
+        onSort={(key, d) => setParams({ sort: key, dir: d })}
+        empty={data && data.sources.length === 0 ? "No source matches these filters." : null}
+        minWidth="760px"
+        cellClass="align-top"
+      />
       <nav aria-label="Pages" className="mt-3 flex justify-end gap-2">
         <Button type="button" variant="quiet" disabled={!data?.previous} onClick={() => data?.previous && setParams({ before: data.previous, after: null }, true)}>
           Previous
