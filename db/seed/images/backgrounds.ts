@@ -1,17 +1,19 @@
 // Grounds behind the figures, in image pixels: a dark interior lit by a leaded window, a street wall
 // of plastered stone, a heavy curtain, bare paper (or glaze), a millefleurs field for the tapestry.
-import type { Pen, Pt } from "./geom";
+import type { Pt } from "./geom";
+import type { Pen } from "./pen";
 import { blend, type Palette } from "./look";
 import type { Rng } from "./random";
 
-export type Ground = "interior-window" | "street-wall" | "curtain" | "paper" | "millefleurs";
+export type Ground = "interior-window" | "street-wall" | "curtain" | "paper" | "millefleurs" | "village";
 
-export function drawGround(pen: Pen, kind: Ground, W: number, H: number, pal: Palette, rng: Rng, paper: string) {
+export function drawGround(pen: Pen, kind: Ground, W: number, H: number, pal: Palette, rng: Rng, paper: string, door = true) {
   switch (kind) {
     case "interior-window": return interior(pen, W, H, pal, rng);
-    case "street-wall": return street(pen, W, H, pal, rng);
+    case "street-wall": return street(pen, W, H, pal, rng, door);
     case "curtain": return curtain(pen, W, H, pal, rng);
     case "millefleurs": return millefleurs(pen, W, H, rng);
+    case "village": return village(pen, W, H, pal, rng, paper);
     case "paper": return pen.poly([[0, 0], [W, 0], [W, H], [0, H]], { fill: paper });
   }
 }
@@ -46,7 +48,7 @@ function floor(pen: Pen, W: number, H: number, y: number, pal: Palette, rng: Rng
   for (let k = 1; k < 5; k++) pen.line([0, y + (H - y) * Math.pow(k / 5, 1.3)], [W, y + (H - y) * Math.pow(k / 5, 1.3) + rng.jitter(6)], { stroke: "#0a0705", sw: 1.6, op: 0.4 });
 }
 
-function street(pen: Pen, W: number, H: number, pal: Palette, rng: Rng) {
+function street(pen: Pen, W: number, H: number, pal: Palette, rng: Rng, door: boolean) {
   const ground = H * 0.82;
   const stone = blend(pal.bgLight, "#9a8a6c", 0.4);
   pen.poly([[0, 0], [W, 0], [W, H], [0, H]], { fill: pen.linear([0, 0], [W, 0], [[0, stone], [1, blend(stone, "#000000", 0.55)]]) });
@@ -60,10 +62,10 @@ function street(pen: Pen, W: number, H: number, pal: Palette, rng: Rng) {
   for (let i = 0; i < 9; i++) {
     const c: Pt = [rng.range(0, W), rng.range(0, ground)];
     const pts: Pt[] = Array.from({ length: 8 }, (_, k) => [c[0] + Math.cos(k * 0.785) * rng.range(120, 320), c[1] + Math.sin(k * 0.785) * rng.range(80, 200)] as Pt);
-    pen.smooth(pts, { fill: blend(stone, "#e8dcc0", 0.35), op: 0.35 });
+    pen.poly(pts, { fill: blend(stone, "#e8dcc0", 0.25), op: 0.18 });
   }
   // A dark arched doorway and a strip of evening sky over the wall.
-  pen.smooth([[W * 0.8, ground], [W * 0.8, H * 0.38], [W * 0.86, H * 0.3], [W * 0.92, H * 0.38], [W * 0.92, ground]], { fill: "#120c08", stroke: "#0a0604", sw: 4 }, false);
+  if (door) pen.smooth([[W * 0.8, ground], [W * 0.8, H * 0.38], [W * 0.86, H * 0.3], [W * 0.92, H * 0.38], [W * 0.92, ground]], { fill: "#120c08", stroke: "#0a0604", sw: 4 }, false);
   pen.poly([[0, 0], [W, 0], [W, H * 0.05], [0, H * 0.07]], { fill: pen.linear([0, 0], [0, H * 0.07], [[0, "#5d6f7a"], [1, "#c9a77a"]]) });
   pen.poly([[0, ground], [W, ground], [W, H], [0, H]], { fill: pen.linear([0, ground], [0, H], [[0, blend(pal.floor, stone, 0.4)], [1, pal.floor]]) });
   for (let i = 0; i < 260; i++) {
@@ -89,6 +91,30 @@ function curtain(pen: Pen, W: number, H: number, pal: Palette, rng: Rng) {
   pen.path([["M", [right * 0.92, H * 0.46]], ["C", [right * 1.02, H * 0.5], [right * 1.06, H * 0.55], [right * 1.1, H * 0.6]]], { stroke: pal.gold, sw: 16 });
   pen.ellipse([right * 1.1, H * 0.64], 26, 60, 0, { fill: pal.gold, stroke: "#3a2a0a", sw: 3 });
   floor(pen, W, H, H * 0.86, pal, rng);
+}
+
+/** Open ground before a row of gabled houses and a church tower, under a pale sky. */
+function village(pen: Pen, W: number, H: number, pal: Palette, rng: Rng, sky: string) {
+  const horizon = H * 0.6;
+  pen.poly([[0, 0], [W, 0], [W, H], [0, H]], { fill: sky });
+  let x = -40;
+  while (x < W) {
+    const w = rng.range(300, 520), h = rng.range(380, 620), roof = rng.range(200, 320);
+    const wall = blend(pal.bgLight, "#d8ccb0", 0.5);
+    pen.poly([[x, horizon], [x, horizon - h], [x + w / 2, horizon - h - roof], [x + w, horizon - h], [x + w, horizon]], { fill: wall, stroke: "#1a140e", sw: 3 });
+    pen.poly([[x - 10, horizon - h + 4], [x + w / 2, horizon - h - roof], [x + w + 10, horizon - h + 4], [x + w / 2, horizon - h - roof + 40]], { fill: blend(pal.cloth2Dark, wall, 0.3), stroke: "#1a140e", sw: 3 });
+    for (let k = 0; k < 2; k++) pen.poly([[x + w * (0.22 + k * 0.4), horizon - h * 0.7], [x + w * (0.38 + k * 0.4), horizon - h * 0.7], [x + w * (0.38 + k * 0.4), horizon - h * 0.45], [x + w * (0.22 + k * 0.4), horizon - h * 0.45]], { fill: "#2a2018", stroke: "#1a140e", sw: 2 });
+    x += w + rng.range(-20, 60);
+  }
+  const tower = blend(pal.bgLight, "#c8bca0", 0.4);
+  pen.poly([[W * 0.47, horizon], [W * 0.47, H * 0.27], [W * 0.53, H * 0.27], [W * 0.53, horizon]], { fill: tower, stroke: "#1a140e", sw: 3 });
+  pen.poly([[W * 0.488, H * 0.33], [W * 0.512, H * 0.33], [W * 0.512, H * 0.4], [W * 0.488, H * 0.4]], { fill: "#2a2018", stroke: "#1a140e", sw: 2 });
+  pen.poly([[W * 0.462, H * 0.27], [W * 0.5, H * 0.08], [W * 0.538, H * 0.27]], { fill: blend(pal.cloth2Dark, tower, 0.3), stroke: "#1a140e", sw: 3 });
+  pen.poly([[0, horizon], [W, horizon], [W, H], [0, H]], { fill: pen.linear([0, horizon], [0, H], [[0, blend(pal.floor, "#d8ccb0", 0.7)], [1, blend(pal.floor, "#d8ccb0", 0.4)]]) });
+  for (let i = 0; i < 40; i++) {
+    const p: Pt = [rng.range(0, W), rng.range(horizon + 40, H)];
+    pen.line(p, [p[0] + rng.range(60, 200), p[1] + rng.jitter(6)], { stroke: "#2a2018", sw: 2, op: 0.6 });
+  }
 }
 
 function millefleurs(pen: Pen, W: number, H: number, rng: Rng) {

@@ -1,6 +1,7 @@
 // The cittern (small flat body, fixed metal frets, wire strings, sickle head with rear pegs) and a bass
 // viol for the emblematic title page. Instrument frames in millimetres, tail at the origin.
-import { add, inset, polar, type Pen, type Pt } from "./geom";
+import { add, inset, polar, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import { drawBody } from "./guitar";
 import { neckHalf, stringLines, type Geometry } from "./instrument";
 import type { Palette } from "./look";

@@ -2,11 +2,12 @@
 // front, then the surface of the medium. Placement depends on format, posture and instrument.
 import { drawGround } from "./backgrounds";
 import { drawViol } from "./cittern";
-import { apply, frame, IDENTITY, type Mat, type Pen, type Pt } from "./geom";
+import { apply, frame, IDENTITY, mul, type Mat, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import { geometry } from "./instrument";
 import { drawInstrument } from "./instruments";
-import { PALETTES, PAPER, type Palette } from "./look";
-import { boy, dancer, dog, drinker, womanAtWindow } from "./people";
+import { blend, PALETTES, PAPER, type Palette } from "./look";
+import { boy, dancer, dog, drinker, drinkerHands, womanAtWindow } from "./people";
 import { drawPlayer, HOLDS } from "./player";
 import { balcony, fountain, garland, glass, jug, songbook, table, tree } from "./props";
 import type { Rng } from "./random";
@@ -39,7 +40,7 @@ export function compose(pen: Pen, spec: SceneParams, W: number, H: number, rng: 
   const paper = spec.medium === "chalk" ? PAPER.chalk : spec.medium === "tile" ? GLAZE : PAPER.print;
   // A print reversed from its painting: the whole plate is mirrored (and so are the evidence boxes).
   if (spec.mirrored) pen.setBase([-1, 0, 0, 1, W, 0]);
-  drawGround(pen, spec.background, W, H, pal, rng.fork(1), paper);
+  drawGround(pen, spec.background, W, H, pal, rng.fork(1), paper, !spec.props.includes("balcony"));
   if (spec.composition === "emblem") emblem(pen, spec, W, H, pal, rng.fork(2));
   else withPlayer(pen, spec, W, H, pal, rng.fork(3));
   pen.setBase(IDENTITY);
@@ -51,22 +52,24 @@ function withPlayer(pen: Pen, spec: SceneParams, W: number, H: number, pal: Pale
   const { x, y, s } = placement(spec, W, H);
   const has = (p: SceneParams["props"][number]) => spec.props.includes(p);
   const at = (fx: number, fy: number, k = 1): Mat => frame([fx * W, fy * H], 0, s * k);
-  const at2 = (fx: number, fy: number, deg: number, k = 1): Mat => frame([fx * W, fy * H], deg, s * k);
 
   if (has("balcony")) {
-    pen.with(at(0.74, 0.3, 0.8), () => balcony(pen, pal, "back"));
-    if (has("woman-at-window")) womanAtWindow(pen, frame([0.74 * W, 0.3 * H + 40 * s * 0.8], 0, s * 0.8), pal);
-    pen.with(at(0.74, 0.3, 0.8), () => balcony(pen, pal, "front"));
+    // High in the wall and further off: smaller than the player in the street.
+    const k = 0.6, by = 0.3;
+    pen.with(at(0.76, by, k), () => balcony(pen, pal, "back"));
+    if (has("woman-at-window")) womanAtWindow(pen, frame([0.76 * W, by * H + 260 * s * k], 0, s * k), pal);
+    pen.with(at(0.76, by, k), () => balcony(pen, pal, "front"));
   }
   if (has("tree")) pen.with(at(0.9, 0.78, 0.9), () => tree(pen, pal, rng));
   if (has("dancers")) {
-    dancer(pen, at(0.66, 0.5, 0.62), pal, true, 0.6);
-    dancer(pen, at(0.82, 0.5, 0.62), pal, false, -0.5);
+    dancer(pen, at(0.64, 0.5, 0.46), pal, true, 0.6);
+    dancer(pen, at(0.8, 0.51, 0.46), pal, false, -0.5);
   }
-  if (has("fountain")) pen.with(at(0.72, 0.8, 0.9), () => fountain(pen, pal));
-  if (has("drinkers")) {
-    drinker(pen, at(0.64, 0.6, 0.95), { sex: "man", headwear: "cap", hair: "short", beard: true, eyesClosed: false }, pal, pal.cloth2, -0.5);
-    drinker(pen, at(0.88, 0.6, 0.95), { sex: "man", headwear: "broad-hat", hair: "long", beard: false, eyesClosed: false }, pal, pal.cloth, -0.3);
+  if (has("fountain")) pen.with(at(0.62, 0.8, 0.85), () => fountain(pen, pal));
+  const drinkers: Mat[] = has("drinkers") ? [at(0.63, 0.6, 0.9), at(0.88, 0.6, 0.9)] : [];
+  if (drinkers.length) {
+    drinker(pen, drinkers[0], { sex: "man", headwear: "cap", hair: "short", beard: true, eyesClosed: false }, pal, pal.cloth2, -0.5);
+    drinker(pen, drinkers[1], { sex: "man", headwear: "broad-hat", hair: "long", beard: false, eyesClosed: false }, pal, pal.cloth, -0.3);
   }
   if (has("table")) {
     const [tx, ty] = has("drinkers") ? [0.76, 0.6] : [0.8, 0.64];
@@ -76,8 +79,13 @@ function withPlayer(pen: Pen, spec: SceneParams, W: number, H: number, pal: Pale
       pen.with(at(tx - 0.12, ty + 0.004), () => glass(pen, true));
       pen.with(at(tx + 0.14, ty + 0.004), () => glass(pen, false));
     }
-    if (has("songbook")) pen.with(at2(tx - 0.02, ty - 0.035, 8, 1.05), () => songbook(pen, pal, rng));
+    // The open book lies on the table: seen from a low angle, so its depth is foreshortened.
+    if (has("songbook")) pen.with(mul(frame([(tx - 0.01) * W, ty * H - 62 * s], 4, s * 0.95), [1, 0, 0, 0.5, 0, 0]), () => songbook(pen, pal, rng));
+    for (const d of drinkers) drinkerHands(pen, d, pal);
   }
+
+  // The blind player sits on a stone block by the fountain.
+  if (has("fountain")) pen.with(at(x / W, y / H), () => pen.poly([[-300, 20], [300, 20], [320, 480], [-320, 480]], { fill: pen.linear([-300, 0], [300, 0], [[0, blend(pal.bgLight, "#c8b890", 0.5)], [1, pal.bg]]), stroke: "#0a0604", sw: 3 }));
   // Contact shadow on the floor.
   pen.ellipse([x, y + (fig.posture === "seated" ? 500 : 880) * s], 460 * s, 60 * s, 0, { fill: "#000000", op: 0.3 });
   const kind = spec.instrument.kind;
@@ -86,13 +94,12 @@ function withPlayer(pen: Pen, spec: SceneParams, W: number, H: number, pal: Pale
     pen, figure: frame([x, y], 0, s), posture: fig.posture, fig, hold, inst: spec.instrument, g: geometry(spec.instrument),
     rh: spec.rightHand, lh: spec.leftHand, pal, rng, chair: fig.posture === "seated" && !has("fountain"), strap: fig.posture === "standing",
   });
-  if (has("boy-tambourine")) pen.group("other:tambourine", () => boy(pen, at(0.78, 0.6, 0.78), pal));
+  if (has("boy-tambourine")) pen.group("other:tambourine", () => boy(pen, at(0.82, 0.62, 0.72), pal));
   if (has("dog")) dog(pen, at(0.74, 0.86, 0.8), pal);
 }
 
 /** Title page: a framed field with a cartouche, a garland, a cittern and a viol hung from it. */
 function emblem(pen: Pen, spec: SceneParams, W: number, H: number, pal: Palette, rng: Rng) {
-  const s = 2.2;
   const ink = "#1a1612";
   for (const x of [0.09 * W, 0.91 * W]) {
     pen.poly([[x - 160, 0.12 * H], [x + 160, 0.12 * H], [x + 160, 0.9 * H], [x - 160, 0.9 * H]], { fill: "#9a8f80", stroke: ink, sw: 4 });
@@ -111,8 +118,8 @@ function emblem(pen: Pen, spec: SceneParams, W: number, H: number, pal: Palette,
   pen.path([["M", [0.5 * W - 120, 0.27 * H]], ["C", [0.5 * W - 260, 0.2 * H], [0.5 * W - 10, 0.2 * H], [0.5 * W + 120, 0.27 * H]]], { fill: "#e8dcc0", stroke: ink, sw: 4 });
   // The cittern and the viol hang head-up from ribbons tied to the garland.
   const g = geometry(spec.instrument);
-  const cm = frame([0.33 * W, 0.8 * H], 84, s);
-  const vm = frame([0.67 * W, 0.83 * H], 95, 1.15);
+  const cm = frame([0.3 * W, 0.84 * H], 84, 3.1);
+  const vm = frame([0.68 * W, 0.83 * H], 95, 1.5);
   pen.line([0.35 * W, 0.3 * H], apply(cm, [g.headEnd - 40, 0]), { stroke: ink, sw: 6 });
   pen.line([0.65 * W, 0.3 * H], apply(vm, [1240, 0]), { stroke: ink, sw: 6 });
   pen.with(cm, () => drawInstrument(pen, g, spec.instrument, pal, rng));

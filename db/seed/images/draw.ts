@@ -2,7 +2,8 @@
 // drawing). renderScene: that SVG through librsvg (sharp) with the medium's grain, as a large JPEG.
 import sharp from "sharp";
 import { canvasSize, compose } from "./compose";
-import { Pen, type Box } from "./geom";
+import { type Box } from "./geom";
+import { Pen } from "./pen";
 import { geometry } from "./instrument";
 import { instrumentCounts } from "./instruments";
 import { lookFor } from "./look";

@@ -1,6 +1,7 @@
 // The player's body in a figure frame (millimetres, origin between the hips, y down): chair, legs or
 // skirt, doublet or bodice, collar, and sleeves that run to wherever the hands have to be.
-import { add, mix, ribbon, type Pen, type Pt } from "./geom";
+import { add, mix, ribbon, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import { blend, type Palette } from "./look";
 import type { Rng } from "./random";
 import type { FigureSpec } from "./types";
@@ -8,8 +9,8 @@ import type { FigureSpec } from "./types";
 export type Posture = "seated" | "standing";
 
 export const SKELETON = {
-  shoulderR: [-200, -535] as Pt,
-  shoulderL: [200, -535] as Pt,
+  shoulderR: [-185, -530] as Pt,
+  shoulderL: [185, -530] as Pt,
   neck: [0, -590] as Pt,
   head: [12, -720] as Pt,
 };
@@ -28,8 +29,8 @@ export function drawChair(pen: Pen, pal: Palette) {
 const stocking = (pal: Palette) => blend(pal.clothDark, pal.linenShadow, 0.35);
 
 function leg(pen: Pen, hip: Pt, knee: Pt, foot: Pt, pal: Palette, breeches: string) {
-  pen.smooth(ribbon([hip, mix(hip, knee, 0.5), knee], [190, 180, 150]), { fill: pen.linear(add(hip, [-90, 0]), add(hip, [90, 0]), [[0, blend(breeches, "#ffffff", 0.15)], [1, blend(breeches, "#000000", 0.45)]]), stroke: "#0a0604", sw: 2.4 });
-  pen.smooth(ribbon([add(knee, [0, 10]), mix(knee, foot, 0.4), add(foot, [0, -20])], [110, 104, 70]), { fill: pen.linear(add(knee, [-50, 0]), add(knee, [60, 0]), [[0, stocking(pal)], [1, blend(stocking(pal), "#000000", 0.45)]]), stroke: "#1a120c", sw: 2 });
+  pen.smooth(ribbon([hip, mix(hip, knee, 0.5), knee], [165, 158, 130]), { fill: pen.linear(add(hip, [-90, 0]), add(hip, [90, 0]), [[0, blend(breeches, "#ffffff", 0.15)], [1, blend(breeches, "#000000", 0.45)]]), stroke: "#0a0604", sw: 2.4 });
+  pen.smooth(ribbon([add(knee, [0, 10]), mix(knee, foot, 0.4), add(foot, [0, -20])], [100, 96, 66]), { fill: pen.linear(add(knee, [-50, 0]), add(knee, [60, 0]), [[0, stocking(pal)], [1, blend(stocking(pal), "#000000", 0.45)]]), stroke: "#1a120c", sw: 2 });
   // A garter ribbon below the knee, and a shoe with a rosette.
   pen.smooth(ribbon([add(knee, [-58, 30]), add(knee, [58, 34])], [22, 22]), { fill: pal.cloth2, stroke: "#0a0604", sw: 1.5 });
   pen.smooth([add(foot, [-48, -24]), add(foot, [52, -26]), add(foot, [78, 18]), add(foot, [-44, 22])], { fill: "#1b120c", stroke: "#000000", sw: 2 });
@@ -42,8 +43,10 @@ export function drawLegs(pen: Pen, fig: FigureSpec, posture: Posture, pal: Palet
     leg(pen, [-90, 20], [-110, 470], [-150, 860], pal, pal.cloth2);
     leg(pen, [90, 20], [100, 470], [120, 870], pal, pal.cloth2);
   } else if (fig.crossedLeg) {
-    leg(pen, [100, 40], [150, 110], [170, 480], pal, pal.cloth2);
-    leg(pen, [-100, 20], [90, 20], [-40, 440], pal, pal.cloth2);
+    // Right over left: the right knee rests on the left one and its shin slants across the left
+    // shin, the foot hanging free beyond it.
+    leg(pen, [100, 30], [110, 130], [110, 495], pal, pal.cloth2);
+    leg(pen, [-100, 20], [120, 40], [270, 400], pal, pal.cloth2);
   } else {
     leg(pen, [-110, 30], [-150, 120], [-175, 490], pal, pal.cloth2);
     leg(pen, [110, 30], [150, 120], [175, 495], pal, pal.cloth2);
@@ -65,7 +68,7 @@ function drawSkirt(pen: Pen, posture: Posture, pal: Palette) {
 
 export function drawTorso(pen: Pen, fig: FigureSpec, pal: Palette, rng: Rng) {
   const woman = fig.sex === "woman";
-  const sh = woman ? 178 : 205, waist = woman ? 118 : 152;
+  const sh = woman ? 172 : 190, waist = woman ? 115 : 140;
   // The neck first, so the collar and the chin overlap it.
   pen.smooth([[-40, -660], [40, -660], [42, -600], [60, -560], [0, -548], [-60, -560], [-42, -600]], { fill: pen.linear([-50, 0], [50, 0], [[0, pal.skin], [1, pal.skinShadow]]), stroke: pal.skinShadow, sw: 2 });
   const out: Pt[] = [[-56, -585], [-150, -570], [-sh, -535], [-sh + 8, -420], [-waist - 10, -250], [-waist, -130], [-waist - 40, -30], [0, woman ? -60 : -10], [waist + 40, -30], [waist, -130], [waist + 10, -250], [sh - 8, -420], [sh, -535], [150, -570], [56, -585]];

@@ -1,6 +1,7 @@
 // The waisted, flat-headed instruments: the five-course guitar (and the six-course vihuela). Drawn in
 // the instrument frame (millimetres); stroke widths are image pixels, so strings stay hair-fine.
-import { inset, ribbon, type Pen, type Pt } from "./geom";
+import { inset, ribbon, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import { neckHalf, stringLines, type Geometry } from "./instrument";
 import type { Palette } from "./look";
 import type { Rng } from "./random";

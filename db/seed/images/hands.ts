@@ -1,7 +1,8 @@
 // The player's hands, placed in the instrument frame so that fingertips sit on the courses and frets
 // they claim: a right hand strumming or plucking over the rose or near the bridge, a left hand
 // stopping a chord (or turning a peg). Poses are pure geometry; drawing follows the pose.
-import { add, mix, ribbon, scaleOf, type Pen, type Pt } from "./geom";
+import { add, mix, ribbon, scaleOf, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import { bodyHalf, courseY, neckHalf, stopX, type Geometry } from "./instrument";
 import type { Palette } from "./look";
 import type { LeftHandSpec, RightHandSpec } from "./types";
@@ -39,9 +40,14 @@ function drawFinger(pen: Pen, f: Finger, pal: Palette) {
 export function drawHand(pen: Pen, pose: HandPose, pal: Palette, name: string) {
   pen.group(name, () => {
     if (pose.contact) pen.ellipse(pose.contact, 9, 4, 0, { fill: "#1a0e06", op: 0.3 });
-    pen.smooth(pose.palm, { fill: pen.radial(pose.palm[0], 80, [[0, pal.skinLight], [0.55, pal.skin], [1, pal.skinShadow]]), stroke: "#4a2a18", sw: 2.6 });
-    // Tendons on the back of the hand.
-    for (const f of pose.fingers.slice(0, 4)) pen.line(mix(pose.wrist, f.joints[0], 0.35), mix(pose.wrist, f.joints[0], 0.85), { stroke: pal.skinShadow, sw: 1.4, op: 0.35 });
+    // Lit at the knuckles, falling into shadow towards the wrist.
+    const knuckles = pose.fingers.slice(0, 4).map((f) => f.joints[0]);
+    const kc = knuckles.reduce((a, b) => [a[0] + b[0] / knuckles.length, a[1] + b[1] / knuckles.length] as Pt, [0, 0] as Pt);
+    pen.smooth(pose.palm, { fill: pen.radial(mix(kc, pose.wrist, 0.25), 95, [[0, pal.skinLight], [0.5, pal.skin], [1, pal.skinShadow]]), stroke: "#4a2a18", sw: 2.4 });
+    for (const k of knuckles) {
+      pen.line(mix(pose.wrist, k, 0.4), mix(pose.wrist, k, 0.88), { stroke: pal.skinShadow, sw: 1.3, op: 0.3 });
+      pen.ellipse(mix(pose.wrist, k, 0.93), 6, 4, 0, { fill: pal.skinLight, op: 0.45 });
+    }
     for (const f of pose.fingers) drawFinger(pen, f, pal);
   });
 }
@@ -57,7 +63,8 @@ function arch(k: Pt, t: Pt, bow: number, width: number, nail = true): Finger {
 }
 
 export function rightHandPose(g: Geometry, spec: RightHandSpec): HandPose {
-  const hx = spec.over === "rose" ? g.rose.c[0] + 8 : g.bridgeX + 62;
+  // Over the rose the hand sits at its neck-side rim, so the rose itself stays in view.
+  const hx = spec.over === "rose" ? g.rose.c[0] + g.rose.r + 16 : g.bridgeX + 62;
   const top = courseY(g, g.stringsPerCourse.length, hx) - 8;
   const low = courseY(g, 1, hx);
   const wrist: Pt = [hx + 22, top - 78];
@@ -78,8 +85,8 @@ export function rightHandPose(g: Geometry, spec: RightHandSpec): HandPose {
     fingers.push(arch(knuckles[2], [hx - 14, top + 26], -10, 15.5, false));
   }
   if (spec.littleFingerOnSoundboard) {
-    const tip: Pt = [hx - 42, Math.min(low + 22, bodyHalf(g, hx - 42) - 12)];
-    fingers.push(arch(knuckles[3], tip, 3, 14));
+    const tip: Pt = [hx - 36, Math.min(low + 14, bodyHalf(g, hx - 36) - 12)];
+    fingers.push(arch(knuckles[3], tip, 3, 13.5));
     contact = [tip[0] + 1, tip[1] + 6];
   } else if (fingers.length < 4) {
     fingers.push(arch(knuckles[3], [hx - 26, top + 14], -8, 14, false));
@@ -118,7 +125,7 @@ function pegPose(g: Geometry, peg: number): HandPose {
   const knob: Pt = [x + 2, y - 31];
   const it: Pt = [knob[0] - 10, knob[1] + 1], tt: Pt = [knob[0] + 11, knob[1] - 1];
   const k1: Pt = [knob[0] - 28, knob[1] - 40], k2: Pt = [knob[0] - 42, knob[1] - 30];
-  const wrist: Pt = [knob[0] - 20, knob[1] - 115];
+  const wrist: Pt = [knob[0] - 14, knob[1] - 96];
   const fingers: Finger[] = [
     arch([k2[0] - 12, k2[1] - 14], [k2[0] - 24, k2[1] + 16], -8, 14, false),
     arch([k2[0] - 4, k2[1] - 4], [k2[0] - 10, k2[1] + 26], -8, 15, false),
@@ -126,6 +133,6 @@ function pegPose(g: Geometry, peg: number): HandPose {
     arch(k1, it, -6, 16),
     finger([[knob[0] + 4, knob[1] - 60], [knob[0] + 14, knob[1] - 30], tt], 18),
   ];
-  const palm: Pt[] = [k1, [knob[0] + 8, knob[1] - 66], [wrist[0] + 30, wrist[1]], [wrist[0] - 28, wrist[1] + 4], [k2[0] - 22, k2[1] - 22], k2];
+  const palm: Pt[] = [k1, [knob[0] + 4, knob[1] - 58], [wrist[0] + 24, wrist[1]], [wrist[0] - 24, wrist[1] + 4], [k2[0] - 18, k2[1] - 20], k2];
   return { palm, fingers, wrist };
 }

@@ -1,6 +1,7 @@
 // Heads in the manner of a provincial painter: an oval face modelled from the upper left, almond
 // eyes, a shadowed nose, hair or a hat. Drawn in a head frame in millimetres (origin mid-face).
-import { type Cmd, type Pen, type Pt } from "./geom";
+import { type Cmd, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import { blend, type Palette } from "./look";
 import type { FigureSpec } from "./types";
 

@@ -1,7 +1,7 @@
 // One entry point for drawing any of the instruments in its own frame, and the counts a scholar
 // would read off it (the same numbers the drawing used).
 import { drawCittern } from "./cittern";
-import type { Pen } from "./geom";
+import type { Pen } from "./pen";
 import { drawFlatHeaded } from "./guitar";
 import { stringCount, type Geometry } from "./instrument";
 import type { Palette } from "./look";

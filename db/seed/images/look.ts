@@ -1,6 +1,6 @@
 // Palettes (the painter's colours) and media (how a chalk drawing, a print, a tile or a tapestry
 // turns those colours into its own: sanguine hatching, black hatching, cobalt washes, wool colours).
-import type { Look, Stops } from "./geom";
+import type { Look, Stops } from "./pen";
 
 export type Medium = "oil" | "chalk" | "etching" | "engraving" | "tile" | "tapestry";
 export type PaletteName = "umber" | "crimson" | "verdigris" | "ochre";
@@ -50,12 +50,10 @@ const OIL: Look = { name: "oil", fill: (c) => c, stroke: (c) => c, gradient: (s)
 function hatchLines(m: number, T: number, per: number, ink: string, w: number) {
   const gap = T / per;
   let out = "";
-  const lo = -Math.abs(m) * T * 2 - T, hi = Math.abs(m) * T * 2 + 2 * T;
-  for (let c = lo; c <= hi; c += gap) {
-    const [x1, x2] = m === Infinity ? [c, c] : [-T, 2 * T];
-    const [y1, y2] = m === Infinity ? [-T, 2 * T] : [c + m * T, c - 2 * m * T];
-    if (m !== Infinity || (c >= -gap && c <= T + gap)) out += `<line x1="${x1}" y1="${y1}" x2="${x2}" y2="${y2}" stroke="${ink}" stroke-width="${w}"/>`;
-  }
+  const line = (x1: number, y1: number, x2: number, y2: number) => (out += `<line x1="${x1}" y1="${y1}" x2="${x2}" y2="${y2}" stroke="${ink}" stroke-width="${w}"/>`);
+  // Vertical lines (engraving cross-hatch) are the one slope that is not a number of rises per run.
+  if (!Number.isFinite(m)) for (let x = gap / 2; x < T; x += gap) line(x, 0, x, T);
+  else for (let c = -Math.abs(m) * T * 2 - T; c <= Math.abs(m) * T * 2 + 2 * T; c += gap) line(-T, c + m * T, 2 * T, c - 2 * m * T);
   return out;
 }
 

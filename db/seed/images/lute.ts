@@ -1,6 +1,7 @@
 // Lute (bowl back, carved rose, pegbox bent back with side pegs) and theorbo (the same family with a
 // long extended neck and a second pegbox for the open bass strings). Instrument frame in mm.
-import { add, type Pen, type Pt } from "./geom";
+import { add, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import { drawBody } from "./guitar";
 import { neckHalf, stringLines, type Geometry } from "./instrument";
 import type { Palette } from "./look";

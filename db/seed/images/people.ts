@@ -1,6 +1,7 @@
 // Figures other than the player: listeners at a table, a woman at a window, a boy with a tambourine,
 // dancers in the distance, a small dog. Each in its own frame, in millimetres.
-import { frame, mul, ribbon, type Mat, type Pen, type Pt } from "./geom";
+import { frame, mul, ribbon, type Mat, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import { drawHead, type HeadStyle } from "./head";
 import { blend, type Palette } from "./look";
 import { tambourine } from "./props";
@@ -13,8 +14,7 @@ function mitt(pen: Pen, c: Pt, angle: number, pal: Palette) {
   for (const y of [-12, 4, 18]) pen.line(r(40, y), r(72, y * 0.9), { stroke: pal.skinShadow, sw: 1.4 });
 }
 
-function bust(pen: Pen, pal: Palette, cloth: string, woman: boolean) {
-  const sh = woman ? 170 : 200;
+function bust(pen: Pen, pal: Palette, cloth: string, woman: boolean, sh = woman ? 160 : 180) {
   pen.smooth([[-40, -650], [40, -650], [50, -560], [0, -550], [-50, -560]], { fill: pal.skinShadow });
   pen.smooth([[-60, -585], [-sh, -530], [-sh - 10, -250], [-150, 0], [150, 0], [sh + 10, -250], [sh, -530], [60, -585]], { fill: pen.linear([-sh, -500], [sh, 0], [[0, blend(cloth, "#ffffff", 0.15)], [1, blend(cloth, "#000000", 0.55)]]), stroke: "#0a0604", sw: 2.4 });
   if (woman) pen.smooth([[-120, -560], [0, -590], [120, -560], [90, -470], [0, -450], [-90, -470]], { fill: pal.skin });
@@ -25,11 +25,17 @@ function bust(pen: Pen, pal: Palette, cloth: string, woman: boolean) {
 export function drinker(pen: Pen, at: Mat, head: HeadStyle, pal: Palette, cloth: string, turn: number) {
   pen.with(at, () => {
     bust(pen, pal, cloth, head.sex === "woman");
-    for (const s of [-1, 1]) pen.smooth(ribbon([[s * 200, -500], [s * 250, -230], [s * 120, -40]], [110, 100, 86]), { fill: blend(cloth, "#000000", 0.3), stroke: "#0a0604", sw: 2 });
-    mitt(pen, [-90, -40], 10, pal);
-    mitt(pen, [100, -45], 170, pal);
+    for (const s of [-1, 1]) pen.smooth(ribbon([[s * 180, -500], [s * 230, -230], [s * 110, -60]], [100, 92, 80]), { fill: blend(cloth, "#000000", 0.3), stroke: "#0a0604", sw: 2 });
   });
   pen.with(mul(at, frame([turn * 20, -720], -turn * 8, 1)), () => drawHead(pen, head, pal, turn));
+}
+
+/** The drinker's hands resting on the table top: drawn after the table. */
+export function drinkerHands(pen: Pen, at: Mat, pal: Palette) {
+  pen.with(at, () => {
+    mitt(pen, [-90, -50], 10, pal);
+    mitt(pen, [95, -55], 170, pal);
+  });
 }
 
 export function womanAtWindow(pen: Pen, at: Mat, pal: Palette) {
@@ -48,11 +54,11 @@ export function boy(pen: Pen, at: Mat, pal: Palette) {
       pen.smooth(ribbon([[s * 70, 0], [s * 80, 380], [s * 95, 760]], [130, 110, 90]), { fill: blend(pal.cloth, "#000000", 0.2), stroke: "#0a0604", sw: 2 });
       pen.smooth([[s * 95 - 60, 740], [s * 95 + 70, 740], [s * 95 + 80, 790], [s * 95 - 60, 790]], { fill: "#1b120c", stroke: "#000000", sw: 2 });
     }
-    bust(pen, pal, pal.cloth2, false);
-    pen.smooth(ribbon([[-190, -500], [-300, -360], [-300, -560]], [100, 90, 80]), { fill: pal.cloth2Dark, stroke: "#0a0604", sw: 2 });
+    bust(pen, pal, pal.cloth2, false, 140);
+    pen.smooth(ribbon([[-150, -500], [-300, -360], [-300, -560]], [90, 82, 74]), { fill: pal.cloth2Dark, stroke: "#0a0604", sw: 2 });
     pen.with(mul(at, frame([-330, -700], 20, 1)), () => tambourine(pen, pal));
     mitt(pen, [-300, -580], -80, pal);
-    pen.smooth(ribbon([[190, -500], [140, -300], [-120, -640]], [100, 90, 80]), { fill: pal.cloth2Dark, stroke: "#0a0604", sw: 2 });
+    pen.smooth(ribbon([[150, -500], [120, -300], [-120, -640]], [90, 82, 74]), { fill: pal.cloth2Dark, stroke: "#0a0604", sw: 2 });
     mitt(pen, [-150, -660], 200, pal);
   });
   pen.with(mul(at, frame([0, -700], 6, 1)), () => drawHead(pen, { sex: "man", headwear: "cap", hair: "short", beard: false, eyesClosed: false }, pal, -0.4));
@@ -62,12 +68,19 @@ export function boy(pen: Pen, at: Mat, pal: Palette) {
 export function dancer(pen: Pen, at: Mat, pal: Palette, woman: boolean, swing: number) {
   pen.with(at, () => {
     if (woman) pen.smooth([[-120, -150], [120, -150], [360 + swing * 80, 780], [0, 820], [-320 + swing * 80, 760]], { fill: pen.linear([-300, 0], [300, 0], [[0, pal.cloth], [1, pal.clothDark]]), stroke: "#0a0604", sw: 2.4 });
-    else for (const s of [-1, 1]) pen.smooth(ribbon([[s * 80, -120], [s * 150 + swing * 60, 350], [s * 120 + swing * 140, 800]], [150, 120, 90]), { fill: pal.cloth2, stroke: "#0a0604", sw: 2.4 });
+    else {
+      // A hop: one leg straight, the other knee raised.
+      pen.smooth(ribbon([[-80, -120], [-110, 350], [-130, 800]], [150, 120, 90]), { fill: pal.cloth2, stroke: "#0a0604", sw: 2.4 });
+      pen.smooth(ribbon([[80, -120], [260, 250], [200, 640]], [150, 120, 90]), { fill: pal.cloth2, stroke: "#0a0604", sw: 2.4 });
+    }
     pen.smooth([[-60, -585], [-180, -530], [-150, -130], [150, -130], [180, -530], [60, -585]], { fill: woman ? pal.cloth2 : pal.cloth, stroke: "#0a0604", sw: 2.4 });
+    // One arm thrown up, the other out and down, as in a turn of the dance.
     for (const s of [-1, 1]) {
-      const hand: Pt = [s * 330, -820 + swing * s * 60];
-      pen.smooth(ribbon([[s * 170, -530], [s * 300, -560], hand], [100, 90, 80]), { fill: woman ? pal.linen : pal.clothDark, stroke: "#0a0604", sw: 2 });
-      mitt(pen, hand, s * 90 - 90, pal);
+      const up = s * swing > 0;
+      const elbow: Pt = up ? [s * 280, -640] : [s * 300, -380];
+      const hand: Pt = up ? [s * 300, -900] : [s * 440, -260];
+      pen.smooth(ribbon([[s * 160, -530], elbow, hand], [100, 90, 80]), { fill: woman ? pal.linen : pal.clothDark, stroke: "#0a0604", sw: 2 });
+      mitt(pen, hand, up ? -90 : s > 0 ? 20 : 160, pal);
     }
   });
   pen.with(mul(at, frame([0, -720], swing * 10, 1)), () => drawHead(pen, { sex: woman ? "woman" : "man", headwear: woman ? "cap" : "beret", hair: woman ? "bun" : "short", beard: !woman, eyesClosed: false }, pal, swing * 0.5));

@@ -1,6 +1,7 @@
 // A player with an instrument: the figure, the instrument held in its frame, and the arms joining the
 // shoulders to the hands' poses, drawn back to front so the right forearm lies over the lower bout.
-import { apply, IDENTITY, mix, mul, frame, type Mat, type Pen, type Pt } from "./geom";
+import { apply, IDENTITY, mix, mul, frame, type Mat, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import { drawCuff, drawChair, drawLegs, drawSleeve, drawTorso, SKELETON, type Posture } from "./figure";
 import { drawHand, leftHandPose, rightHandPose } from "./hands";
 import { drawHead } from "./head";
@@ -24,7 +25,7 @@ export const HOLDS: Record<"seated" | "standing" | "theorbo" | "lute", Hold> = {
   seated: { tail: [-400, 40], angle: 32, elbowL: [345, -150], headTilt: -7, turn: 0.35 },
   standing: { tail: [-360, -120], angle: 30, elbowL: [370, -200], headTilt: -6, turn: 0.3 },
   lute: { tail: [-430, 30], angle: 22, elbowL: [380, -120], headTilt: -5, turn: 0.3 },
-  theorbo: { tail: [-220, 120], angle: 68, elbowL: [300, -250], headTilt: 4, turn: -0.25 },
+  theorbo: { tail: [-130, 120], angle: 64, elbowL: [330, -330], headTilt: 4, turn: -0.25 },
 };
 
 export type PlayerCtx = {
@@ -54,20 +55,23 @@ export function drawPlayer(c: PlayerCtx) {
 
   pen.with(figure, () => {
     if (c.chair) drawChair(pen, pal);
-    drawLegs(pen, fig, c.posture, pal);
     if (fig.cloak) cloak(pen, pal);
+    drawLegs(pen, fig, c.posture, pal);
     drawTorso(pen, fig, pal, c.rng);
   });
   if (c.strap) strap(c, inst);
   const shR = px(figure, SKELETON.shoulderR), shL = px(figure, SKELETON.shoulderL);
   const elbowR = rpose?.elbow ? px(inst, rpose.elbow) : px(figure, [-300, -180]);
   pen.with(IDENTITY, () => {
-    drawSleeve(pen, [shR, mix(shR, elbowR, 0.5), elbowR], [125 * s, 115 * s, 100 * s], pal, woman);
+    drawSleeve(pen, [shR, mix(shR, elbowR, 0.5), elbowR], [112 * s, 104 * s, 94 * s], pal, woman);
     if (lpose) {
-      const wl = px(inst, lpose.wrist), el = px(figure, hold.elbowL);
-      drawSleeve(pen, [shL, mix(shL, el, 0.5), el], [125 * s, 112 * s, 100 * s], pal, woman);
-      drawSleeve(pen, [el, mix(el, wl, 0.5), wl], [100 * s, 88 * s, 78 * s], pal, woman);
-      drawCuff(pen, wl, el, 78 * s, pal);
+      const wl = px(inst, lpose.wrist);
+      // Turning a peg lifts the elbow out to the side, below and beyond the hand.
+      const wf = apply(frame(hold.tail, hold.angle, 1), lpose.wrist);
+      const el = px(figure, c.lh?.action === "turn-peg" ? [wf[0] + 110, wf[1] + 270] : hold.elbowL);
+      drawSleeve(pen, [shL, mix(shL, el, 0.5), el], [112 * s, 102 * s, 92 * s], pal, woman);
+      drawSleeve(pen, [el, mix(el, wl, 0.5), wl], [92 * s, 82 * s, 72 * s], pal, woman);
+      drawCuff(pen, wl, el, 72 * s, pal);
     }
   });
   pen.with(mul(figure, frame(SKELETON.head, hold.headTilt, 1)), () => drawHead(pen, fig, pal, hold.turn));
@@ -75,8 +79,8 @@ export function drawPlayer(c: PlayerCtx) {
   if (rpose) {
     const wr = px(inst, rpose.wrist);
     pen.with(IDENTITY, () => {
-      drawSleeve(pen, [elbowR, mix(elbowR, wr, 0.5), wr], [100 * s, 90 * s, 78 * s], pal, woman);
-      drawCuff(pen, wr, elbowR, 78 * s, pal);
+      drawSleeve(pen, [elbowR, mix(elbowR, wr, 0.5), wr], [94 * s, 84 * s, 72 * s], pal, woman);
+      drawCuff(pen, wr, elbowR, 72 * s, pal);
     });
     pen.with(inst, () => drawHand(pen, rpose, pal, "rightHand"));
   }
@@ -103,8 +107,9 @@ function strap(c: PlayerCtx, inst: Mat) {
   });
 }
 
+/** A cloak thrown over the left shoulder, hanging behind the figure to below the knee. */
 function cloak(pen: Pen, pal: Palette) {
-  pen.smooth([[60, -580], [230, -560], [300, -300], [330, 100], [360, 420], [180, 460], [210, 100], [190, -300]], {
+  pen.smooth([[-120, -590], [120, -600], [250, -560], [330, -300], [390, 100], [420, 520], [140, 560], [-200, 520], [-300, 200], [-260, -300]], {
     fill: pen.linear([100, -560], [360, 300], [[0, pal.cloth2], [1, pal.cloth2Dark]]),
     stroke: "#0a0604",
     sw: 2.4,

@@ -1,6 +1,7 @@
 // Things in the room or the street, each drawn in its own frame in millimetres: a carpet-covered
 // table, a jug and glasses, an open songbook, a fountain, a balcony, a garland, a tree, a tambourine.
-import { polar, type Pen, type Pt } from "./geom";
+import { polar, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import { blend, type Palette } from "./look";
 import type { Rng } from "./random";
 
@@ -82,30 +83,40 @@ export function balcony(pen: Pen, pal: Palette, part: "back" | "front") {
   for (const s of [-1, 1]) pen.poly([[s * 360, -760], [s * 560, -720], [s * 560, -40], [s * 360, 0]], { fill: pen.linear([s * 360, 0], [s * 560, 0], [[0, pal.cloth2Dark], [1, pal.cloth2]]), stroke: "#0a0604", sw: 3 });
 }
 
+/** A stone parapet with balusters in relief: solid, so it hides whoever leans on it below the waist. */
 function railing(pen: Pen, pal: Palette) {
-  pen.poly([[-460, 0], [460, 0], [460, 40], [-460, 40]], { fill: pal.bgLight, stroke: "#0a0604", sw: 3 });
-  pen.line([-440, 330], [440, 330], { stroke: "#100b08", sw: 12 });
-  pen.line([-440, 40], [-440, 330], { stroke: "#100b08", sw: 12 });
-  pen.line([440, 40], [440, 330], { stroke: "#100b08", sw: 12 });
-  for (let x = -400; x <= 400; x += 80) {
-    pen.line([x, 40], [x, 330], { stroke: "#100b08", sw: 7 });
-    pen.circle([x + 40, 180], 24, { stroke: "#100b08", sw: 5 });
+  const stone = blend(pal.bgLight, "#b0a080", 0.4), shade = blend(stone, "#000000", 0.45);
+  pen.poly([[-470, -10], [470, -10], [470, 50], [-470, 50]], { fill: pen.linear([0, -10], [0, 50], [[0, stone], [1, shade]]), stroke: "#0a0604", sw: 3 });
+  pen.poly([[-450, 50], [450, 50], [450, 330], [-450, 330]], { fill: shade, stroke: "#0a0604", sw: 3 });
+  for (let x = -390; x <= 390; x += 97.5) {
+    pen.smooth([[x - 20, 60], [x + 20, 60], [x + 16, 110], [x + 36, 200], [x + 22, 300], [x + 28, 320], [x - 28, 320], [x - 22, 300], [x - 36, 200], [x - 16, 110]], { fill: pen.linear([x - 36, 0], [x + 36, 0], [[0, stone], [1, blend(shade, "#000000", 0.2)]]), stroke: "#0a0604", sw: 2 });
   }
-  pen.poly([[-460, 330], [460, 330], [420, 390], [-420, 390]], { fill: pal.bgLight, stroke: "#0a0604", sw: 3 });
+  pen.poly([[-480, 330], [480, 330], [440, 400], [-440, 400]], { fill: stone, stroke: "#0a0604", sw: 3 });
 }
 
-/** A garland of leaves along a curve, with fruit here and there. */
+/** A swag of laurel along a curve, leaves in pairs with fruit here and there, and a ribbon bow. */
 export function garland(pen: Pen, path: Pt[], pal: Palette, rng: Rng) {
+  const leaf = blend(pal.cloth, "#3f5a3c", 0.7);
   for (let i = 0; i < path.length - 1; i++) {
     const [a, b] = [path[i], path[i + 1]];
-    for (let k = 0; k < 10; k++) {
-      const t = k / 10;
-      const c: Pt = [a[0] + (b[0] - a[0]) * t + rng.jitter(14), a[1] + (b[1] - a[1]) * t + rng.jitter(14)];
-      const ang = rng.range(0, 360);
-      pen.ellipse(polar(c, 34, (ang * Math.PI) / 180), 44, 18, ang, { fill: blend(pal.cloth, "#3f5a3c", 0.7), stroke: "#0a0604", sw: 1.6 });
-      if (rng.chance(0.25)) pen.circle(c, 22, { fill: pal.cloth2, stroke: "#0a0604", sw: 1.6 });
+    const along = (Math.atan2(b[1] - a[1], b[0] - a[0]) * 180) / Math.PI;
+    for (let k = 0; k < 26; k++) {
+      const t = k / 26;
+      const c: Pt = [a[0] + (b[0] - a[0]) * t + rng.jitter(10), a[1] + (b[1] - a[1]) * t + rng.jitter(10)];
+      for (const side of [-1, 1]) {
+        const ang = along + side * rng.range(35, 70);
+        pen.ellipse(polar(c, 40, (ang * Math.PI) / 180), 52, 17, ang, { fill: leaf, stroke: "#0a0604", sw: 2 });
+        pen.line(c, polar(c, 80, (ang * Math.PI) / 180), { stroke: "#0a0604", sw: 1.4 });
+      }
+      if (rng.chance(0.2)) pen.circle(c, 24, { fill: pal.cloth2, stroke: "#0a0604", sw: 2 });
     }
   }
+  const mid = path[Math.floor(path.length / 2)];
+  for (const s of [-1, 1]) {
+    pen.smooth([mid, [mid[0] + s * 120, mid[1] - 90], [mid[0] + s * 170, mid[1] - 20], [mid[0] + s * 110, mid[1] + 30]], { fill: pal.linen, stroke: "#0a0604", sw: 3 });
+    pen.smooth([mid, [mid[0] + s * 60, mid[1] + 140], [mid[0] + s * 100, mid[1] + 300], [mid[0] + s * 70, mid[1] + 310], [mid[0] + s * 30, mid[1] + 150]], { fill: pal.linen, stroke: "#0a0604", sw: 3 });
+  }
+  pen.circle(mid, 34, { fill: pal.linen, stroke: "#0a0604", sw: 3 });
 }
 
 export function tree(pen: Pen, pal: Palette, rng: Rng) {

@@ -1,6 +1,7 @@
 // Roses (soundhole decorations), drawn fine enough to be read at full zoom: an open hole ringed with
 // inlay, a flat carved rosette, and the recessed parchment "wedding cake" of tiers with tracery.
-import { polar, type Pen, type Pt } from "./geom";
+import { polar, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import type { Palette } from "./look";
 import type { RoseKind } from "./types";
 

@@ -46,7 +46,7 @@ const PARAMS: SceneParams[] = [
   },
   {
     seed: 1657, slug: "village-feast-dancers", sourceTitle: "Dancers and a Guitar at a Village Feast",
-    orientation: "landscape", medium: "etching", palette: "verdigris", composition: "standing", background: "street-wall",
+    orientation: "landscape", medium: "etching", palette: "verdigris", composition: "standing", background: "village",
     instrument: guitar({ rose: "open", bridge: "rectangular", frets: 8 }),
     player: man({ posture: "standing", headwear: "broad-hat", hair: "short" }),
     rightHand: { action: "strum", over: "rose", fingers: "extended", littleFingerOnSoundboard: false },
@@ -87,7 +87,7 @@ const PARAMS: SceneParams[] = [
     player: man({ headwear: "bare", hair: "long", beard: false }),
     rightHand: { action: "pluck", over: "rose", fingers: "curled", littleFingerOnSoundboard: true },
     leftHand: { action: "chord", thumbOverNeck: false, stops: [{ finger: 1, course: 2, fret: 1 }, { finger: 2, course: 4, fret: 2 }] },
-    props: [], mirrored: false,
+    props: ["table", "songbook"], mirrored: false,
   },
   {
     seed: 1530, slug: "tapestry-vihuela", sourceTitle: "Tapestry Fragment with a Vihuela",

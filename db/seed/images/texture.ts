@@ -1,7 +1,8 @@
 // What makes the drawing read as an object: craquelure and varnish on the paintings, a plate mark on
 // the prints, a glazed edge with corner motifs on the tile, the weave and frayed edge of the tapestry.
 // (The grain of canvas, paper and glaze is raster noise added at render time, see finish.ts.)
-import { num, type Pen, type Pt } from "./geom";
+import { num, type Pt } from "./geom";
+import { type Pen } from "./pen";
 import { PAPER, type Medium } from "./look";
 import type { Rng } from "./random";
 
@@ -25,7 +26,7 @@ function craquelure(pen: Pen, W: number, H: number, rng: Rng) {
       if (j + 1 < rows && rng.chance(0.8)) seg(pts[j][i], pts[j + 1][i]);
     }
   pen.raw(`<path d="${d}" fill="none" stroke="#f3e2bc" stroke-width="1.2" stroke-opacity="0.1" transform="translate(1.5 1.5)"/>`);
-  pen.raw(`<path d="${d}" fill="none" stroke="#140b04" stroke-width="1.3" stroke-opacity="0.28"/>`);
+  pen.raw(`<path d="${d}" fill="none" stroke="#140b04" stroke-width="1.2" stroke-opacity="0.2"/>`);
 }
 
 function varnish(pen: Pen, W: number, H: number) {

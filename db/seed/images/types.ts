@@ -6,7 +6,7 @@ export type InstrumentKind = "guitar" | "vihuela" | "lute" | "theorbo" | "citter
 export type RoseKind = "open" | "flat-rosette" | "wedding-cake";
 export type BridgeKind = "rectangular" | "moustache";
 export type Composition = "seated" | "standing" | "two-figures" | "tavern-table" | "emblem";
-export type Background = "interior-window" | "street-wall" | "curtain" | "paper" | "millefleurs";
+export type Background = "interior-window" | "street-wall" | "curtain" | "paper" | "millefleurs" | "village";
 export type Orientation = "landscape" | "portrait" | "square";
 
 /** A stopped note: finger 1 (index) to 4 (little), course 1 (treble) upwards, fret 1 upwards. */
