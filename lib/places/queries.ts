@@ -4,6 +4,7 @@ import { db, type Executor } from "@/db/client";
 import { places } from "@/db/schema";
 import { authorize, type Actor } from "@/lib/auth/policy";
 import { countryName } from "@/lib/catalogue/countries";
+import { escapeLike } from "@/lib/db-like";
 import { foldName } from "./fold";
 import type { PlaceRecord, PlaceSuggestion } from "./schemas";
 
@@ -11,7 +12,8 @@ export type { PlaceRecord, PlaceSuggestion } from "./schemas";
 /** Kept for callers written before PlaceRecord existed. */
 export type PlaceSummary = PlaceRecord;
 
-const suggestionColumns = {
+/** The columns a place needs wherever it is shown beside something else (a source, a suggestion). */
+export const suggestionColumns = {
   id: places.id,
   kind: places.kind,
   name: places.name,
@@ -36,7 +38,6 @@ function withCountry<T extends SuggestionRow>(row: T): T & { country: string | n
   return { ...row, country: countryName(row.countryCode) };
 }
 
-const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 /**
  * Type-ahead: names starting with what was typed (folded), historical areas first, then cities by

@@ -5,13 +5,14 @@ import { db } from "@/db/client";
 import { auditEvents, collections, places, sources, users } from "@/db/schema";
 import { changedFields } from "@/lib/audit/diff";
 import { authorize, type Actor } from "@/lib/auth/policy";
+import { escapeLike } from "@/lib/db-like";
+import { suggestionColumns } from "@/lib/places/queries";
 import { overlapQueryDays, readDating } from "@/lib/dating";
 import { NotFoundError, ValidationError } from "@/lib/errors";
 import { afterCursor, decodeCursor, encodeCursor } from "./keyset";
 import type { SourceListQuery } from "./schemas";
 import { canSeeSource, visibleSources } from "./visibility";
 
-const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 const SORT_COLUMNS = { title: sources.title, dating: sources.datingSearchEarliest, created: sources.createdAt } as const;
 
@@ -109,15 +110,7 @@ export async function getSource(actor: Actor | null, id: number) {
     .select({
       source: sources,
       collection: { id: collections.id, name: collections.name, city: collections.city, countryCode: collections.countryCode },
-      place: {
-        id: places.id,
-        kind: places.kind,
-        name: places.name,
-        countryCode: places.countryCode,
-        subdivisionCode: places.subdivisionCode,
-        latitude: places.latitude,
-        longitude: places.longitude,
-      },
+      place: suggestionColumns,
       creatorName: creators.name,
     })
     .from(sources)

@@ -3,6 +3,7 @@ import { and, asc, count, desc, eq, isNotNull, isNull, like, or, type SQL } from
 import { db } from "@/db/client";
 import { users } from "@/db/schema";
 import { authorize, type Actor } from "@/lib/auth/policy";
+import { escapeLike } from "@/lib/db-like";
 import type { UserListQuery } from "./schemas";
 
 export const publicUserColumns = {
@@ -27,7 +28,6 @@ export type UserRow = {
   version: number;
 };
 
-const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 export async function listUsers(actor: Actor | null, query: UserListQuery) {
   authorize(actor, "user.manage");
