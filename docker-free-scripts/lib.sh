@@ -12,7 +12,10 @@ use_profile() {
   PROFILE="$1"
   case "$PROFILE" in
     demo) local base_db=33061 s3=4569 search=7700 smtp=2525 mailapi=1080 app="${PORT:-3000}" ;;
-    test) local base_db=33071 s3=4579 search=7710 smtp=2535 mailapi=1090 app="${TEST_APP_PORT:-3100}" ;;
+    # CORDARIUM_TEST_SLOT (0–9) moves every test port up by that much, so that several checkouts can
+    # run their suites side by side on one machine.
+    test) local n="${CORDARIUM_TEST_SLOT:-0}"
+      local base_db=$((33071 + n)) s3=$((4579 + n)) search=$((7710 + n)) smtp=$((2535 + n)) mailapi=$((1090 + n)) app="${TEST_APP_PORT:-$((3100 + n))}" ;;
     *) die "unknown profile $PROFILE" ;;
   esac
   DATA="$ROOT/.data/$PROFILE"

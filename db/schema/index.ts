@@ -8,3 +8,6 @@ export * from "./places";
 export * from "./sources";
 export * from "./images";
 export * from "./jobs";
+export * from "./vocabulary";
+export * from "./regions";
+export * from "./notifications";

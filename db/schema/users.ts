@@ -2,6 +2,8 @@ import { mysqlEnum, mysqlTable, timestamp, uniqueIndex, varchar } from "drizzle-
 import { id, timestamps, version } from "./columns";
 
 export const ROLES = ["reader", "contributor", "editor", "admin"] as const;
+/** How a person wants review e-mails: each at once, one digest a day, or none. */
+export const NOTIFY_MODES = ["immediate", "daily", "off"] as const;
 
 export const users = mysqlTable(
   "users",
@@ -15,6 +17,7 @@ export const users = mysqlTable(
     emailVerifiedAt: timestamp("email_verified_at", { fsp: 3 }),
     disabledAt: timestamp("disabled_at", { fsp: 3 }),
     lastSignInAt: timestamp("last_sign_in_at", { fsp: 3 }),
+    notify: mysqlEnum("notify", NOTIFY_MODES).notNull().default("immediate"),
     version: version(),
     ...timestamps,
   },
@@ -23,3 +26,4 @@ export const users = mysqlTable(
 
 export type User = typeof users.$inferSelect;
 export type Role = (typeof ROLES)[number];
+export type NotifyMode = (typeof NOTIFY_MODES)[number];

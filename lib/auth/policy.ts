@@ -26,9 +26,12 @@ export const RULES = {
   "source.edit": { min: "contributor", ownOnlyBelow: "editor" },
   "image.upload": { min: "contributor", ownOnlyBelow: "editor" },
   "region.create": { min: "contributor" },
-  "region.edit": { min: "contributor", ownOnlyBelow: "editor" },
+  // Regions are peer-reviewed work: an editor vets others' regions but does not rewrite them.
+  "region.edit": { min: "contributor", ownOnlyBelow: "admin" },
   "region.propose": { min: "contributor", ownOnlyBelow: "admin" },
   "region.withdraw": { min: "contributor", ownOnlyBelow: "admin" },
+  "region.discuss": { min: "contributor" },
+  "account.notifications": { min: "reader" },
   "collection.create": { min: "contributor" },
   "collection.edit": { min: "contributor", ownOnlyBelow: "editor" },
   "review.decide": { min: "editor", notOwn: true },

@@ -17,13 +17,16 @@ const LOWEST: Record<Action, "anyone" | "reader" | "contributor" | "editor" | "a
   "export.visible": "anyone",
   "archive.read_proposed": "reader",
   "dossier.manage": "reader",
+  "account.notifications": "reader",
+  "region.discuss": "contributor",
   "source.create": "contributor",
   "region.create": "contributor",
   "collection.create": "contributor",
   // Others' work: editors may change anyone's; contributors only their own (checked below).
   "source.edit": "editor",
   "image.upload": "editor",
-  "region.edit": "editor",
+  // Regions: editors review others' work and do not rewrite it; only an admin acting for the archive.
+  "region.edit": "admin",
   "collection.edit": "editor",
   // Proposing or withdrawing someone else's region: only an admin acting for the archive.
   "region.propose": "admin",
