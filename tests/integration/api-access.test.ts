@@ -34,6 +34,13 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/sources/import/template": { GET: "public" },
   "/api/sources/import/preview": { POST: "contributor" },
   "/api/sources/import/commit": { POST: "contributor" },
+  "/api/images/[id]/regions": { GET: "public", POST: "contributor" },
+  "/api/images/[id]/regions/propose": { POST: "contributor" },
+  "/api/regions/[id]": { GET: "public", PATCH: "contributor", DELETE: "contributor" },
+  "/api/regions/[id]/restore": { POST: "contributor" },
+  "/api/regions/[id]/propose": { POST: "contributor" },
+  "/api/regions/[id]/withdraw": { POST: "contributor" },
+  "/api/regions/[id]/review": { POST: "editor" },
 };
 
 const ROLES = ["reader", "contributor", "editor", "admin"] as const;
