@@ -41,6 +41,8 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/regions/[id]/propose": { POST: "contributor" },
   "/api/regions/[id]/withdraw": { POST: "contributor" },
   "/api/regions/[id]/review": { POST: "editor" },
+  "/api/regions/[id]/annotation": { GET: "public" },
+  "/api/images/[id]/annotations": { GET: "public" },
 };
 
 const ROLES = ["reader", "contributor", "editor", "admin"] as const;
