@@ -34,6 +34,13 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/sources/import/template": { GET: "public" },
   "/api/sources/import/preview": { POST: "contributor" },
   "/api/sources/import/commit": { POST: "contributor" },
+  "/api/vocabulary": { GET: "public", POST: "editor" },
+  "/api/vocabulary/order": { POST: "editor" },
+  "/api/vocabulary/aspects/[id]": { PATCH: "editor", DELETE: "editor" },
+  "/api/vocabulary/aspects/[id]/terms": { POST: "editor" },
+  "/api/vocabulary/aspects/[id]/order": { POST: "editor" },
+  "/api/vocabulary/terms/[id]": { PATCH: "editor", DELETE: "editor" },
+  "/api/vocabulary/terms/[id]/merge": { POST: "editor" },
 };
 
 const ROLES = ["reader", "contributor", "editor", "admin"] as const;
