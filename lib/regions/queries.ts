@@ -81,6 +81,7 @@ export async function listRegionsOfImage(actor: Actor | null, imageId: number, o
 /** The regions of every photograph of a source the caller may see (for exports and the stringing check). */
 export async function listRegionsOfSource(actor: Actor | null, sourceId: number, opts: RegionVisibility = {}): Promise<RegionView[]> {
   authorize(actor, "archive.read");
+  if (opts.proposed) authorize(actor, "archive.read_proposed");
   return selectRegionViews(db(), actor, eq(images.sourceId, sourceId), opts);
 }
 

@@ -43,6 +43,7 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/regions/[id]/review": { POST: "editor" },
   "/api/regions/[id]/annotation": { GET: "public" },
   "/api/images/[id]/annotations": { GET: "public" },
+  "/api/sources/[id]/stringing": { GET: "public" },
   "/api/vocabulary": { GET: "public", POST: "editor" },
   "/api/vocabulary/order": { POST: "editor" },
   "/api/vocabulary/aspects/[id]": { PATCH: "editor", DELETE: "editor" },

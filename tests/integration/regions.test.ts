@@ -193,3 +193,21 @@ describe("review states and what each reader sees", () => {
     expect(events.find((e) => e.action === "region.proposed")!.before).toBeTruthy();
   });
 });
+
+describe("the stringing check over a source's regions", () => {
+  it("reads ten pegs and nine strings as five courses with a single first course (common practice)", async () => {
+    const { sourceId: sid, imageId: iid } = await photographedSource(contributor, 1000, 800);
+    const count = (key: string, value: number) => ({ aspectId: vocab.aspect(key), count: value, confidence: "certain" });
+    const mark = (observations: unknown[]) =>
+      call(`/api/images/${iid}/regions`, { jar: contributor, json: { shape: { kind: "rectangle", x: 10, y: 10, w: 80, h: 80 }, observations } });
+    await mark([count("peg_count", 10)]);
+    await mark([count("string_count", 9), count("course_count", 5)]);
+    const report = await json<{ status: string; summary: string; interpretations: { singleCourses: number; doubleCourses: number; unusedPegs: number }[] }>(
+      await call(`/api/sources/${sid}/stringing`, { jar: contributor }),
+    );
+    expect(report.status).toBe("fits");
+    expect(report.interpretations[0]).toMatchObject({ singleCourses: 1, doubleCourses: 4, unusedPegs: 1 });
+    // Readers see only vetted work: nothing is vetted here yet.
+    expect((await json<{ status: string }>(await call(`/api/sources/${sid}/stringing`, { jar: reader }))).status).toBe("empty");
+  });
+});
