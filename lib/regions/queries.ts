@@ -45,7 +45,8 @@ export async function selectRegionViews(tx: Executor, actor: Actor | null, where
     .orderBy(asc(regionVersions.boxY), asc(regionVersions.boxX), asc(regions.id));
   const obs = await observationsOf(tx, rows.map((r) => r.versionId));
   return rows.map((r) => {
-    const shownWhich = r.versionId === r.workingVersionId ? "working" : "vetted";
+    const shownWhich = r.versionId === r.vettedVersionId ? "vetted" : "working";
+    const isWorking = r.versionId === r.workingVersionId;
     const hasVetted = r.vettedVersionId !== null;
     const view = {
       id: r.id,
@@ -66,7 +67,7 @@ export async function selectRegionViews(tx: Executor, actor: Actor | null, where
       createdAt: r.createdAt.toISOString(),
       updatedAt: r.updatedAt.toISOString(),
     } as const;
-    return { ...view, can: regionPermissions(actor, { authorId: r.authorId, state: r.versionState, hasVetted, shown: shownWhich }) };
+    return { ...view, can: regionPermissions(actor, { authorId: r.authorId, state: r.versionState, hasVetted, isWorking }) };
   });
 }
 
