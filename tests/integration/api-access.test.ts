@@ -41,6 +41,16 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/regions/[id]/propose": { POST: "contributor" },
   "/api/regions/[id]/withdraw": { POST: "contributor" },
   "/api/regions/[id]/review": { POST: "editor" },
+  "/api/regions/[id]/annotation": { GET: "public" },
+  "/api/images/[id]/annotations": { GET: "public" },
+  "/api/sources/[id]/stringing": { GET: "public" },
+  "/api/vocabulary": { GET: "public", POST: "editor" },
+  "/api/vocabulary/order": { POST: "editor" },
+  "/api/vocabulary/aspects/[id]": { PATCH: "editor", DELETE: "editor" },
+  "/api/vocabulary/aspects/[id]/terms": { POST: "editor" },
+  "/api/vocabulary/aspects/[id]/order": { POST: "editor" },
+  "/api/vocabulary/terms/[id]": { PATCH: "editor", DELETE: "editor" },
+  "/api/vocabulary/terms/[id]/merge": { POST: "editor" },
 };
 
 const ROLES = ["reader", "contributor", "editor", "admin"] as const;
