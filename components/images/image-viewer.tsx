@@ -30,11 +30,13 @@ type Props = {
   canDraw: boolean;
   /** The signed-in person's user id (their own regions are marked as theirs), or null. */
   viewerId: number | null;
+  /** May the viewer ask for proposed, not yet reviewed, evidence (signed-in readers and above)? */
+  canSeeProposed: boolean;
   /** A region to select on arrival (links in notifications name one). */
   initialRegionId?: number | null;
 };
 
-export function ImageViewer({ image, sourceTitle, others, canDraw, viewerId, initialRegionId = null }: Props) {
+export function ImageViewer({ image, sourceTitle, others, canDraw, viewerId, canSeeProposed, initialRegionId = null }: Props) {
   const hintId = useId();
   const controls = useViewerControls();
   const [failed, setFailed] = useState<string | null>(null);
@@ -80,7 +82,7 @@ export function ImageViewer({ image, sourceTitle, others, canDraw, viewerId, ini
         <ShortcutHelp id={hintId} canDraw={canDraw} />
       </div>
       <div className="grid content-start gap-6">
-        <RegionPanel imageId={image.id} workspace={workspace} canDraw={canDraw} viewerId={viewerId} />
+        <RegionPanel imageId={image.id} sourceId={image.sourceId} workspace={workspace} canDraw={canDraw} canSeeProposed={canSeeProposed} viewerId={viewerId} />
         <ImageDetails image={image} />
       </div>
       {others.length > 1 && (

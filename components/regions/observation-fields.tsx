@@ -4,7 +4,7 @@
 // takes (a term from the list, a whole number, or words), and how sure the describer is.
 import { inputClass } from "@/components/ui/field";
 import { CONFIDENCE_WORDS, type Confidence, type ObservationInput } from "@/lib/regions/types";
-import { SECTION_WORDS, type Vocabulary, type VocabularyAspect } from "./use-vocabulary";
+import type { Vocabulary, VocabularyAspect } from "./use-vocabulary";
 
 const small = `${inputClass} py-1 text-sm`;
 
@@ -12,8 +12,8 @@ export function AspectPicker({ id, value, vocabulary, onChange }: { id: string; 
   return (
     <select id={id} className={small} value={value ?? ""} onChange={(e) => onChange(e.target.value ? Number(e.target.value) : null)}>
       <option value="">Choose what you observe…</option>
-      {vocabulary.sections.map(([section, aspects]) => (
-        <optgroup key={section} label={SECTION_WORDS[section] ?? section}>
+      {vocabulary.sections.map(({ section, label, aspects }) => (
+        <optgroup key={section} label={label}>
           {aspects
             .filter((a) => !a.deprecated || a.id === value)
             .map((a) => (
@@ -36,7 +36,8 @@ export function ObservationValue({ id, aspect, value, onChange }: ValueProps) {
       <select id={id} className={small} value={value.termId ?? ""} onChange={(e) => onChange({ termId: e.target.value ? Number(e.target.value) : null })}>
         <option value="">Choose…</option>
         {aspect.terms
-          .filter((t) => !t.deprecated || t.id === value.termId)
+          // Deprecated and merged terms are not offered, but one already recorded stays shown.
+          .filter((t) => (!t.deprecated && t.mergedIntoId === null) || t.id === value.termId)
           .map((t) => (
             <option key={t.id} value={t.id} title={t.description ?? undefined}>
               {t.label}

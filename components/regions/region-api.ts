@@ -15,15 +15,17 @@ export const createRegion = (imageId: number, shape: RegionShape) => api<RegionV
 export const updateRegion = (id: number, version: number, change: RegionChange) =>
   api<RegionView>(`/api/regions/${id}`, { method: "PATCH", body: { version, ...change } });
 
-export const deleteRegion = (id: number, version: number) => api<{ ok: true }>(`/api/regions/${id}`, { method: "DELETE", body: { version } });
+/** Answers the region's version after the deletion: restoring it names that version. */
+export const deleteRegion = (id: number, version: number) => api<{ ok: true; version: number }>(`/api/regions/${id}`, { method: "DELETE", body: { version } });
 
-export const restoreRegion = (id: number) => api<RegionView>(`/api/regions/${id}/restore`, { body: {} });
+export const restoreRegion = (id: number, version: number) => api<RegionView>(`/api/regions/${id}/restore`, { body: { version } });
 
 export const proposeRegion = (id: number, version: number) => api<RegionView>(`/api/regions/${id}/propose`, { body: { version } });
 
 export const withdrawRegion = (id: number, version: number) => api<RegionView>(`/api/regions/${id}/withdraw`, { body: { version } });
 
-export const proposeAllRegions = (imageId: number) => api<{ proposed: number[] }>(`/api/images/${imageId}/regions/propose`, { body: {} });
+export const proposeAllRegions = (imageId: number) =>
+  api<{ proposed: number[]; skipped: { id: number; reason: string }[] }>(`/api/images/${imageId}/regions/propose`, { body: {} });
 
 /** The region stored now, when the server refused a change because someone saved first (409). */
 export function conflictCurrent(error: unknown): RegionView | null {

@@ -51,7 +51,7 @@ export function RegionEditor({ draft, name, canDraw, vocabulary, saver, actions 
       {canDraw && (view.can.propose || view.can.withdraw || view.can.delete) && (
         <div className="flex flex-wrap gap-2 border-t border-rule pt-3">
           {view.can.propose && (
-            <Button type="button" disabled={actions.working || Boolean(draft.conflict)} onClick={() => void actions.propose(id)}>
+            <Button type="button" disabled={actions.working || Boolean(draft.conflict) || draft.observations.length === 0} onClick={() => void actions.propose(id)}>
               Propose
             </Button>
           )}
@@ -67,6 +67,7 @@ export function RegionEditor({ draft, name, canDraw, vocabulary, saver, actions 
           )}
         </div>
       )}
+      {canDraw && view.can.propose && draft.observations.length === 0 && <p className="text-xs text-ink-faint">Record at least one observation before proposing the region for review.</p>}
     </section>
   );
 }

@@ -8,12 +8,13 @@ import { Notice } from "@/components/ui/notice";
 import { RegionEditor } from "./region-editor";
 import { RegionList, regionName } from "./region-list";
 import { SaveStatus } from "./save-status";
+import { SourceStringing } from "./source-stringing";
 import { useVocabulary } from "./use-vocabulary";
 import type { RegionWorkspace } from "./use-region-workspace";
 
-type Props = { imageId: number; workspace: RegionWorkspace; canDraw: boolean; viewerId: number | null };
+type Props = { imageId: number; sourceId: number; workspace: RegionWorkspace; canDraw: boolean; canSeeProposed: boolean; viewerId: number | null };
 
-export function RegionPanel({ imageId, workspace, canDraw, viewerId }: Props) {
+export function RegionPanel({ imageId, sourceId, workspace, canDraw, canSeeProposed, viewerId }: Props) {
   const vocabulary = useVocabulary();
   const { drafts, selected, list, actions, saver, undo } = workspace;
   const index = selected ? drafts.indexOf(selected) : -1;
@@ -23,10 +24,14 @@ export function RegionPanel({ imageId, workspace, canDraw, viewerId }: Props) {
       <h2 id="regions-heading" className="text-xl">
         Evidence on this photograph
       </h2>
-      <label className="inline-flex items-center gap-2">
-        <input type="checkbox" checked={workspace.proposed} onChange={(e) => workspace.setProposed(e.target.checked)} className="accent-accent" />
-        Show proposed evidence (not yet reviewed)
-      </label>
+      {canSeeProposed ? (
+        <label className="inline-flex items-center gap-2">
+          <input type="checkbox" checked={workspace.proposed} onChange={(e) => workspace.setProposed(e.target.checked)} className="accent-accent" />
+          Show proposed evidence (not yet reviewed)
+        </label>
+      ) : (
+        <p className="text-ink-faint">Vetted evidence only. Sign in to see evidence proposed but not yet reviewed.</p>
+      )}
       {canDraw && (
         <div className="flex flex-wrap items-center gap-2">
           <Button type="button" variant="quiet" disabled={undo.size === 0 && !saver.busy()} onClick={() => void actions.undoLast()} aria-keyshortcuts="Control+Z Meta+Z">
@@ -59,6 +64,7 @@ export function RegionPanel({ imageId, workspace, canDraw, viewerId }: Props) {
       )}
       {vocabulary.error && <Notice tone="warn">The list of aspects could not be loaded: {vocabulary.error.message}</Notice>}
       {selected && <RegionEditor draft={selected} name={regionName(selected, index)} canDraw={canDraw} vocabulary={vocabulary} saver={saver} actions={actions} />}
+      <SourceStringing sourceId={sourceId} proposed={workspace.proposed} />
     </section>
   );
 }

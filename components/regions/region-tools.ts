@@ -46,9 +46,13 @@ export function commandFor(e: KeyPress, canDraw: boolean): RegionCommand | null 
   return null;
 }
 
-/** Keys typed into a field are the field's, not ours. */
+const NOT_TYPED = new Set(["checkbox", "radio", "button", "submit", "reset", "image", "range", "color", "file"]);
+
+/** Keys typed into a field (or steering a list box) are the field's, not ours; a radio button or a checkbox has none to lose. */
 export function isTypingTarget(target: EventTarget | null): boolean {
   if (!target || typeof (target as Element).closest !== "function") return false;
   const el = target as HTMLElement;
-  return el.isContentEditable || el.closest("input, textarea, select, [contenteditable='true']") !== null;
+  if (el.isContentEditable || el.closest("textarea, select, [contenteditable='true']")) return true;
+  const input = el.closest("input");
+  return input !== null && !NOT_TYPED.has(input.type);
 }

@@ -28,7 +28,7 @@ export function useRegionActions(opts: { imageId: number; list: RegionList; save
 
   const create = useMutation({ mutationFn: (shape: RegionShape) => createRegion(imageId, shape) });
   const remove = useMutation({ mutationFn: (r: RegionView) => deleteRegion(r.id, r.version) });
-  const restore = useMutation({ mutationFn: (id: number) => restoreRegion(id) });
+  const restore = useMutation({ mutationFn: (v: { id: number; version: number }) => restoreRegion(v.id, v.version) });
   const propose = useMutation({ mutationFn: (r: RegionView) => proposeRegion(r.id, r.version) });
   const withdraw = useMutation({ mutationFn: (r: RegionView) => withdrawRegion(r.id, r.version) });
   const proposeAll = useMutation({ mutationFn: () => proposeAllRegions(imageId) });
@@ -60,10 +60,10 @@ export function useRegionActions(opts: { imageId: number; list: RegionList; save
       }
       saver.forget(id);
       try {
-        await remove.mutateAsync(list.current(id) ?? region);
+        const { version } = await remove.mutateAsync(list.current(id) ?? region);
         list.drop(id);
         select(null);
-        if (opts.undoable ?? true) undo.record({ kind: "delete", id });
+        if (opts.undoable ?? true) undo.record({ kind: "delete", id, version });
         setNotice({ tone: "info", text: "Region deleted. Undo brings it back." });
       } catch (e) {
         refused(e, "delete it");
@@ -91,9 +91,13 @@ export function useRegionActions(opts: { imageId: number; list: RegionList; save
   const proposeMine = useCallback(async () => {
     if (!(await saver.flushAll())) return;
     try {
-      const { proposed } = await proposeAll.mutateAsync();
+      const { proposed, skipped } = await proposeAll.mutateAsync();
       await list.refresh();
-      setNotice({ tone: "ok", text: proposed.length === 0 ? "None of your regions here was waiting to be proposed." : `${proposed.length} ${proposed.length === 1 ? "region" : "regions"} proposed for review.` });
+      const regions = (n: number) => `${n} ${n === 1 ? "region" : "regions"}`;
+      const done = proposed.length === 0 ? "None of your regions here was proposed." : `${regions(proposed.length)} proposed for review.`;
+      // The server says why it left a region out (no observation yet, say): pass that on, once per reason.
+      const reasons = [...new Set(skipped.map((s) => s.reason))].join(" ");
+      setNotice({ tone: skipped.length ? "warn" : "ok", text: skipped.length ? `${done} ${regions(skipped.length)} not: ${reasons}` : done });
     } catch (e) {
       setNotice({ tone: "warn", text: message(e) });
     }
@@ -115,7 +119,7 @@ export function useRegionActions(opts: { imageId: number; list: RegionList; save
       await deleteOne(entry.id, { undoable: false });
     } else {
       try {
-        const view = await restore.mutateAsync(entry.id);
+        const view = await restore.mutateAsync(entry);
         list.put(view);
         select(view.id);
         setNotice({ tone: "info", text: "The deleted region is back." });

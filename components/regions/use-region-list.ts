@@ -28,13 +28,23 @@ export function useRegionList(imageId: number, proposed: boolean) {
     staleTime: Infinity,
   });
 
-  // Both lists of the photograph (with and without proposed work) take every answer.
+  // Both lists of the photograph (with and without proposed work) take every answer, and the source's
+  // stringing check, which counts what the regions say, is read again.
   const put = useCallback(
-    (view: RegionView) => client.setQueriesData<RegionView[]>({ queryKey: ["regions", imageId] }, (old) => (old ? upsert(old, view) : old)),
+    (view: RegionView) => {
+      client.setQueriesData<RegionView[]>({ queryKey: ["regions", imageId] }, (old) => (old ? upsert(old, view) : old));
+      void client.invalidateQueries({ queryKey: ["stringing"] });
+    },
     [client, imageId],
   );
-  const drop = useCallback((id: number) => client.setQueriesData<RegionView[]>({ queryKey: ["regions", imageId] }, (old) => old?.filter((r) => r.id !== id)), [client, imageId]);
-  const refresh = useCallback(() => client.invalidateQueries({ queryKey: ["regions", imageId] }), [client, imageId]);
+  const drop = useCallback(
+    (id: number) => {
+      client.setQueriesData<RegionView[]>({ queryKey: ["regions", imageId] }, (old) => old?.filter((r) => r.id !== id));
+      void client.invalidateQueries({ queryKey: ["stringing"] });
+    },
+    [client, imageId],
+  );
+  const refresh = useCallback(() => Promise.all([client.invalidateQueries({ queryKey: ["regions", imageId] }), client.invalidateQueries({ queryKey: ["stringing"] })]), [client, imageId]);
   /** The region as the cache holds it now (not as of the last render). */
   const current = useCallback(
     (id: number) => client.getQueryData<RegionView[]>(regionsKey(imageId, proposed))?.find((r) => r.id === id),

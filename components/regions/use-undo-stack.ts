@@ -5,7 +5,11 @@
 import { useCallback, useReducer, useRef } from "react";
 import type { RegionChange } from "./region-api";
 
-export type UndoEntry = { kind: "edit"; id: number; before: RegionChange } | { kind: "create"; id: number } | { kind: "delete"; id: number };
+export type UndoEntry =
+  | { kind: "edit"; id: number; before: RegionChange }
+  | { kind: "create"; id: number }
+  /** `version`: the deleted region's, which the restore names. */
+  | { kind: "delete"; id: number; version: number };
 
 const LIMIT = 100;
 

@@ -6,43 +6,29 @@ import { useQuery } from "@tanstack/react-query";
 import { useMemo } from "react";
 import { api } from "@/lib/client/api";
 import type { ObservationInput } from "@/lib/regions/types";
+import { ASPECT_SECTIONS, SECTION_LABELS } from "@/lib/vocabulary/kinds";
+import type { AspectView, TermView, VocabularyList } from "@/lib/vocabulary/types";
 
-export type VocabularyTerm = { id: number; key: string; label: string; description: string | null; position: number; deprecated: boolean };
-export type VocabularyAspect = {
-  id: number;
-  key: string;
-  label: string;
-  description: string | null;
-  kind: "terms" | "count" | "text";
-  section: string;
-  position: number;
-  deprecated: boolean;
-  terms: VocabularyTerm[];
-};
-
-/** The headings of the aspect picker, in the order a describer works: the instrument, then the player. */
-export const SECTION_WORDS: Record<string, string> = {
-  instrument: "The instrument",
-  player: "The player",
-  context: "Setting and ensemble",
-  reliability: "The picture as evidence",
-};
+export type VocabularyAspect = AspectView;
+export type VocabularyTerm = TermView;
 
 export function useVocabulary() {
   const query = useQuery({
     queryKey: ["vocabulary"],
-    queryFn: () => api<{ aspects: VocabularyAspect[] }>("/api/vocabulary").then((v) => v.aspects),
+    queryFn: () => api<VocabularyList>("/api/vocabulary").then((v) => v.aspects),
     staleTime: Infinity,
     refetchOnWindowFocus: false,
   });
   const aspects = useMemo(() => query.data ?? [], [query.data]);
   const byId = useMemo(() => new Map(aspects.map((a) => [a.id, a])), [aspects]);
-  const sections = useMemo(() => {
-    const groups = new Map<string, VocabularyAspect[]>();
-    for (const a of [...aspects].sort((x, y) => x.position - y.position)) groups.set(a.section, [...(groups.get(a.section) ?? []), a]);
-    const known = Object.keys(SECTION_WORDS);
-    return [...groups.entries()].sort(([a], [b]) => (known.indexOf(a) + 1 || 99) - (known.indexOf(b) + 1 || 99));
-  }, [aspects]);
+  // Grouped under the vocabulary's own headings, in its order.
+  const sections = useMemo(
+    () =>
+      ASPECT_SECTIONS.map((section) => ({ section, label: SECTION_LABELS[section], aspects: aspects.filter((a) => a.section === section).sort((x, y) => x.position - y.position) })).filter(
+        (g) => g.aspects.length > 0,
+      ),
+    [aspects],
+  );
   return { aspects, byId, sections, loading: query.isPending, error: query.error };
 }
 

@@ -64,6 +64,7 @@ export default async function ImageViewerPage({ params, searchParams }: Props) {
           others={others}
           canDraw={can(actor, "region.create")}
           viewerId={actor?.id ?? null}
+          canSeeProposed={can(actor, "archive.read_proposed")}
           initialRegionId={typeof region === "string" ? positive(region) : null}
         />
       ) : (
