@@ -5,12 +5,11 @@
 import { rm } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { expect, test, type Page } from "@playwright/test";
-import { call, DEMO, signedIn, unique } from "../support/app";
+import { expect, test } from "@playwright/test";
+import { call, DEMO, signedIn, unique, type Jar } from "../support/app";
 import { fixtureDir, writePhotographs } from "../fixtures/photographs";
 import { SourceImagesSection } from "./pages/images-page";
-import { RegionsPage, type ListedShape, type Point } from "./pages/regions-page";
-import { expectSignedIn, SignInPage } from "./pages/sign-in-page";
+import { RegionsPage, saveSession, type ListedShape, type Point } from "./pages/regions-page";
 
 const PROCESSING = 60_000;
 const IMAGE = { width: 2000, height: 1500 };
@@ -25,27 +24,20 @@ test.use({ viewport: { width: 1280, height: 1400 }, storageState: SESSION });
 test.describe.configure({ timeout: 90_000 });
 
 let dir: string;
+let jar: Jar;
 let sourceId: number;
 let imageId: number;
-
-async function signInAsContributor(page: Page) {
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.withPassword(DEMO.contributor);
-  await expectSignedIn(page, "contributor");
-}
 
 test.beforeAll(async ({ browser }) => {
   test.setTimeout(PROCESSING + 60_000);
   dir = await fixtureDir();
-  const jar = await signedIn(DEMO.contributor);
+  jar = await signedIn(DEMO.contributor);
   const res = await call("/api/sources", { jar, json: { title: unique("A cittern player under a tree"), objectType: "painting" } });
   expect(res.status).toBe(200);
   sourceId = ((await res.json()) as { source: { id: number } }).source.id;
   // Uploaded through the page, as a contributor does (the same steps as the images test).
-  const page = await browser.newPage({ storageState: undefined });
-  await signInAsContributor(page);
-  await page.context().storageState({ path: SESSION });
+  await saveSession(browser, DEMO.contributor, "contributor", SESSION);
+  const page = await browser.newPage({ storageState: SESSION });
   const section = new SourceImagesSection(page);
   await section.open(sourceId);
   await section.drop(await writePhotographs(dir, 1, "cittern"));
@@ -92,7 +84,7 @@ test("a real pointer drag with the Rectangle tool draws a region in image pixels
   await regions.tool("Rectangle").click();
   await regions.drag(await regions.toScreen([1100, 700], 2), await regions.toScreen([1300, 850], 2));
   await expect(regions.items).toHaveCount(2);
-  const second = await regions.listedShape(regions.items.filter({ has: page.getByRole("button", { pressed: true }) }));
+  const second = await regions.listedShape(regions.selectedItem);
   expectNear(second, { x: 1100, y: 700, w: 200, h: 150 });
 });
 
@@ -112,7 +104,7 @@ test("with Select/move a drag pans the photograph and draws nothing", async ({ p
   await regions.tool("Rectangle").click();
   await regions.drag(await regions.toScreen([900, 600], 2), await regions.toScreen([1100, 750], 2));
   await expect(regions.items).toHaveCount(before + 1);
-  expectNear(await regions.listedShape(regions.items.filter({ has: page.getByRole("button", { pressed: true }) })), { x: 1100, y: 800, w: 200, h: 150 });
+  expectNear(await regions.listedShape(regions.selectedItem), { x: 1100, y: 800, w: 200, h: 150 });
 });
 
 test("clicks with the Polygon tool add corners, and a click on the first point closes the polygon", async ({ page }) => {
@@ -129,8 +121,35 @@ test("clicks with the Polygon tool add corners, and a click on the first point c
   for (const c of corners) await regions.clickAt(await regions.toScreen(c));
   await regions.clickAt(await regions.toScreen(corners[0]));
   await expect(regions.items).toHaveCount(before + 1);
-  const polygon = await regions.listedShape(regions.items.filter({ has: page.getByRole("button", { pressed: true }) }));
+  const polygon = await regions.listedShape(regions.selectedItem);
   expect(polygon.kind).toBe("polygon");
   expect(polygon.points).toBe(4);
   expectNear(polygon, { x: 300, y: 850, w: 500, h: 500 });
+});
+
+test("a region of one's own, once selected, is reshaped by dragging a corner and moved by dragging its inside", async ({ page }) => {
+  // Placed where the other tests draw nothing.
+  const res = await call(`/api/images/${imageId}/regions`, { jar, json: { shape: { kind: "rectangle", x: 1400, y: 150, w: 300, h: 250 } } });
+  expect(res.status).toBe(201);
+  const { id } = (await res.json()) as { id: number };
+  const regions = new RegionsPage(page, IMAGE);
+  await regions.open(sourceId, imageId, `?region=${id}`);
+  const item = regions.byId(id);
+  const outline = item.getByTestId("region-shape");
+  await expect(item.getByRole("button")).toHaveAttribute("aria-pressed", "true");
+
+  // The lower right corner, pulled 100 pixels further out each way.
+  await regions.drag(await regions.toScreen([1700, 400]), await regions.toScreen([1800, 500]));
+  await expect(outline).not.toHaveText("rectangle at 1400, 150, 300 × 250 px");
+  await regions.expectSaved();
+  expectNear(await regions.listedShape(item), { x: 1400, y: 150, w: 400, h: 350 });
+
+  // The whole shape, moved 100 pixels left and down.
+  const reshaped = (await outline.textContent())!;
+  await regions.drag(await regions.toScreen([1600, 300]), await regions.toScreen([1500, 400]));
+  await expect(outline).not.toHaveText(reshaped);
+  await regions.expectSaved();
+  expectNear(await regions.listedShape(item), { x: 1300, y: 250, w: 400, h: 350 });
+  const stored = (await (await call(`/api/regions/${id}`, { jar })).json()) as { shape: ListedShape; version: number };
+  expectNear(stored.shape, { x: 1300, y: 250, w: 400, h: 350 });
 });

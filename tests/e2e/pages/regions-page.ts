@@ -1,5 +1,17 @@
-import { expect, type Locator, type Page } from "@playwright/test";
+import { expect, type Browser, type Locator, type Page } from "@playwright/test";
 import { ImageViewerPage } from "./images-page";
+import { expectSignedIn, SignInPage } from "./sign-in-page";
+
+/** Signs in once through the sign-in page and keeps the session in `file`, for test.use({ storageState }). */
+export async function saveSession(browser: Browser, email: string, role: string, file: string) {
+  const page = await browser.newPage({ storageState: undefined });
+  const signIn = new SignInPage(page);
+  await signIn.open();
+  await signIn.withPassword(email);
+  await expectSignedIn(page, role);
+  await page.context().storageState({ path: file });
+  await page.close();
+}
 
 export type Point = [number, number];
 export type ListedShape = { kind: "rectangle" | "polygon"; x: number; y: number; w: number; h: number; points?: number };
@@ -9,7 +21,7 @@ export class RegionsPage {
   readonly viewer: ImageViewerPage;
 
   constructor(
-    private readonly page: Page,
+    readonly page: Page,
     /** The photograph's size in pixels (OpenSeadragon fits it to the canvas at "home"). */
     private readonly image: { width: number; height: number },
   ) {
@@ -74,5 +86,38 @@ export class RegionsPage {
 
   item(index: number): Locator {
     return this.items.nth(index);
+  }
+
+  byId(id: number): Locator {
+    return this.page.locator(`[data-testid="region-item"][data-region-id="${id}"]`);
+  }
+
+  /** The list item of the selected region. */
+  get selectedItem(): Locator {
+    return this.items.filter({ has: this.page.getByRole("button", { pressed: true }) });
+  }
+
+  get label(): Locator {
+    return this.editor.getByLabel("Label", { exact: true });
+  }
+
+  /** Puts an observation together in the editor's "Add an observation" box and adds it. */
+  async addObservation(aspect: string, value: string, confidence: "certain" | "probable" | "possible") {
+    const box = this.editor.getByRole("group", { name: "Add an observation" });
+    await box.getByLabel("Aspect").selectOption({ label: aspect });
+    const control = box.getByLabel(/^(Value|Number|What you see)$/);
+    if ((await control.evaluate((el) => el.tagName)) === "SELECT") await control.selectOption({ label: value });
+    else await control.fill(value);
+    await box.getByRole("radio", { name: confidence }).check();
+    await box.getByRole("button", { name: "Add observation" }).click();
+  }
+
+  /** The editor's row of a recorded observation, by its aspect. */
+  observationRow(aspect: string): Locator {
+    return this.editor.getByTestId("observation-row").filter({ hasText: aspect });
+  }
+
+  async expectSaved() {
+    await expect(this.saveStatus).toHaveText("saved", { timeout: 15_000 });
   }
 }
