@@ -57,17 +57,22 @@ export function AnnotationSync({ imageSize, regions, selectedId, onCreate, onSha
     }
   }, [anno, regions, imageSize]);
 
-  // The page's selection onto the layer; a region out of sight is brought to the middle of the view.
+  // The page's selection onto the layer; a region newly selected out of sight (from the list, by a key)
+  // is brought to the middle of the view, once: later changes to the list must not pull the view back.
+  const centred = useRef<number | null>(null);
   useEffect(() => {
     if (!anno) return;
     const current = anno.getSelected().map((a) => regionId(a));
     if (selectedId === null) {
+      centred.current = null;
       if (current.length > 0) anno.cancelSelected();
       return;
     }
     const region = latest.current.regions.find((r) => r.id === selectedId);
     if (!region || !anno.state.store.getAnnotation(String(selectedId))) return;
     if (current.length !== 1 || current[0] !== selectedId) anno.setSelected(String(selectedId), region.editable);
+    if (centred.current === selectedId) return;
+    centred.current = selectedId;
     const { viewport } = anno.viewer;
     const { x, y, w, h } = boundingBox(region.shape);
     const box = viewport.imageToViewportRectangle(x, y, w, h);
