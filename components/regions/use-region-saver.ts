@@ -30,7 +30,6 @@ export function useRegionSaver(list: RegionList, record: (entry: UndoEntry) => v
   const conflicts = useRef(new Map<number, Conflict>());
   const timers = useRef(new Map<number, ReturnType<typeof setTimeout>>());
   const inFlight = useRef(new Map<number, Promise<boolean>>());
-  const again = useRef(new Set<number>());
   const edited = useRef<number[]>([]);
   const save = useMutation({ mutationFn: (v: { id: number; version: number; change: RegionChange }) => updateRegion(v.id, v.version, v.change) });
 
@@ -43,11 +42,9 @@ export function useRegionSaver(list: RegionList, record: (entry: UndoEntry) => v
   const flush = useCallback(
     (id: number): Promise<boolean> => {
       clearTimeout(timers.current.get(id));
+      // After the save on its way, with the version it brings back.
       const running = inFlight.current.get(id);
-      if (running) {
-        again.current.add(id);
-        return running.then(() => flush(id));
-      }
+      if (running) return running.then(() => flush(id));
       const sent = pending.current.get(id);
       const stored = list.current(id);
       if (!sent || conflicts.current.has(id)) return Promise.resolve(!sent);
@@ -64,7 +61,8 @@ export function useRegionSaver(list: RegionList, record: (entry: UndoEntry) => v
             before.current.delete(id);
             set(id, "saved");
           } else {
-            // Edited again while this save was out: those edits undo to what this save stored.
+            // Edited again while this save was out: those edits undo to what this save stored, and
+            // go once the person pauses (their timer is running) or when a chained flush comes.
             before.current.set(id, { fields: fieldsOf(view), undoable: true });
             set(id, "pending");
           }
@@ -82,10 +80,7 @@ export function useRegionSaver(list: RegionList, record: (entry: UndoEntry) => v
           }
           return false;
         })
-        .finally(() => {
-          inFlight.current.delete(id);
-          if (again.current.delete(id) && states.current.get(id) === "pending") void flush(id);
-        });
+        .finally(() => inFlight.current.delete(id));
       inFlight.current.set(id, done);
       return done;
     },

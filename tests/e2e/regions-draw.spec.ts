@@ -5,7 +5,7 @@
 import { rm } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { expect, test } from "@playwright/test";
+import { expect as baseExpect, test } from "@playwright/test";
 import { call, DEMO, signedIn, unique, type Jar } from "../support/app";
 import { fixtureDir, writePhotographs } from "../fixtures/photographs";
 import { SourceImagesSection } from "./pages/images-page";
@@ -21,7 +21,9 @@ const SESSION = path.join(tmpdir(), `cordarium-regions-contributor-${process.pid
 // Tall enough for the whole canvas (70 % of the window's height, below the page header) to be on screen.
 test.use({ viewport: { width: 1280, height: 1400 }, storageState: SESSION });
 // This machine is shared and slow at times: drawing tests wait for tiles and saves, not for a clock.
-test.describe.configure({ timeout: 90_000 });
+test.describe.configure({ timeout: 120_000 });
+// Each step waits for a save or a load: allow for a busy machine.
+const expect = baseExpect.configure({ timeout: 20_000 });
 
 let dir: string;
 let jar: Jar;

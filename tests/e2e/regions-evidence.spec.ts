@@ -4,7 +4,7 @@
 import { rm } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { expect, test } from "@playwright/test";
+import { expect as baseExpect, test } from "@playwright/test";
 import { call, DEMO, signedIn, type Jar } from "../support/app";
 import { photographedSource, vocabulary, type Vocabulary } from "../support/evidence";
 import { RegionsPage, saveSession } from "./pages/regions-page";
@@ -14,6 +14,8 @@ const READER = path.join(tmpdir(), `cordarium-evidence-reader-${process.pid}.jso
 const IMAGE = { width: 2000, height: 1500 };
 test.use({ viewport: { width: 1280, height: 1400 }, storageState: SESSION });
 test.describe.configure({ timeout: 120_000 });
+// Each step waits for a save or a load: allow for a busy machine.
+const expect = baseExpect.configure({ timeout: 20_000 });
 
 let contributor: Jar;
 let vocab: Vocabulary;
