@@ -1,6 +1,7 @@
 // The evidence vocabulary through its API: the public list, editors' changes with versions, refusals
 // that change nothing, deletion only while unused, and merges that rewrite the observations of real
 // regions (made through the regions API on a processed photograph).
+import { execFileSync } from "node:child_process";
 import { beforeAll, describe, expect, it } from "vitest";
 import { VOCABULARY } from "@/lib/vocabulary/definition";
 import type { AspectView, TermView } from "@/lib/vocabulary/types";
@@ -258,5 +259,31 @@ describe("vocabulary in use", () => {
     const current = now.terms[0];
     expect((await call(`/api/vocabulary/terms/${a.id}`, { jar: editor, method: "PATCH", json: { version: current.version, deprecated: false } })).status).toBe(400);
     expect((await call(`/api/vocabulary/terms/${a.id}/merge`, { jar: editor, json: { intoTermId: b.id, version: current.version } })).status).toBe(400);
+  });
+});
+
+describe("seeding again", () => {
+  // The seed runs at every start: it must add what is missing and nothing else.
+  const seed = () => execFileSync("node", ["--import", "tsx", "db/seed/index.ts"], { env: { ...process.env, CORDARIUM_SEED_IMAGES: "0" }, stdio: "pipe" });
+
+  it("keeps editors' wording and order, and does not bring back a term an editor deleted", async () => {
+    const support = (await list(editor, true)).find((a) => a.key === "support")!;
+    const table = support.terms.find((t) => t.key === "table")!;
+    const knee = support.terms.find((t) => t.key === "knee")!;
+    expect(table.usage).toBe(0);
+    const reworded = await call(`/api/vocabulary/terms/${knee.id}`, { jar: editor, method: "PATCH", json: { version: knee.version, label: "knee or thigh" } });
+    expect(reworded.status).toBe(200);
+    expect((await call(`/api/vocabulary/terms/${table.id}`, { jar: editor, method: "DELETE", json: { version: table.version } })).status).toBe(200);
+
+    seed();
+    const after = (await list(editor, true)).find((a) => a.key === "support")!;
+    expect(after.terms.map((t) => t.key)).toEqual(support.terms.filter((t) => t.key !== "table").map((t) => t.key));
+    expect(after.terms.find((t) => t.key === "knee")!.label).toBe("knee or thigh");
+    expect((await list()).filter((a) => a.key === "support")).toHaveLength(1);
+
+    // Put the demo vocabulary back as it was for the tests that follow.
+    const restoredKnee = after.terms.find((t) => t.key === "knee")!;
+    await call(`/api/vocabulary/terms/${restoredKnee.id}`, { jar: editor, method: "PATCH", json: { version: restoredKnee.version, label: knee.label } });
+    await call(`/api/vocabulary/aspects/${support.id}/terms`, { jar: editor, json: { key: "table", label: table.label, description: table.description } });
   });
 });
