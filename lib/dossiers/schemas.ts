@@ -10,11 +10,11 @@ export const dossierTitle = z.string({ error: "Give the dossier a title." }).tri
 const description = z.preprocess(blankToNull, z.string().trim().max(5000, "Use at most 5000 characters.").nullable());
 export const visibility = z.enum(DOSSIER_VISIBILITIES, { error: "Choose private, shared or public." });
 
-export const dossierCreateSchema = z.object({
-  title: dossierTitle,
-  description: description.default(null),
-  visibility: visibility.default("private"),
-});
+// The fields the owner types: the create form and the edit form check them in the browser too.
+export const dossierFieldsSchema = z.object({ title: dossierTitle, description: description.default(null) });
+export type DossierFields = z.output<typeof dossierFieldsSchema>;
+
+export const dossierCreateSchema = dossierFieldsSchema.extend({ visibility: visibility.default("private") });
 export type DossierCreate = z.output<typeof dossierCreateSchema>;
 
 // Rename, describe, change visibility: any of them, with the version read.
