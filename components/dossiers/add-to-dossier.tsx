@@ -60,22 +60,24 @@ export function AddToDossier({ kind, id, className = "" }: Props) {
             <p className="text-warn">{dossiers.error instanceof ApiError && dossiers.error.status === 401 ? "Sign in to use dossiers." : "Your dossiers could not be loaded."}</p>
           ) : (
             <>
-              <label className="flex flex-col gap-1 font-semibold text-ink-soft">
+              <label htmlFor={`${panelId}-dossier`} className="font-semibold text-ink-soft">
                 Dossier
-                <select value={selected} onChange={(e) => setChoice(e.target.value)} className={inputClass}>
-                  {mine.map((d) => (
-                    <option key={d.id} value={d.id}>
-                      {d.title}
-                    </option>
-                  ))}
-                  <option value={NEW}>A new dossier…</option>
-                </select>
               </label>
+              <select id={`${panelId}-dossier`} value={selected} onChange={(e) => setChoice(e.target.value)} className={inputClass}>
+                {mine.map((d) => (
+                  <option key={d.id} value={d.id}>
+                    {d.title}
+                  </option>
+                ))}
+                <option value={NEW}>A new dossier…</option>
+              </select>
               {selected === NEW && (
-                <label className="flex flex-col gap-1 font-semibold text-ink-soft">
-                  Title of the new dossier
-                  <input value={title} onChange={(e) => setTitle(e.target.value)} className={inputClass} required maxLength={200} />
-                </label>
+                <>
+                  <label htmlFor={`${panelId}-title`} className="font-semibold text-ink-soft">
+                    Title of the new dossier
+                  </label>
+                  <input id={`${panelId}-title`} value={title} onChange={(e) => setTitle(e.target.value)} className={inputClass} required maxLength={200} />
+                </>
               )}
               <Button type="submit" disabled={busy || (selected === NEW && !title.trim())}>
                 {busy ? "Adding…" : `Add this ${kind}`}

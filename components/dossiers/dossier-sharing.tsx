@@ -1,7 +1,7 @@
 "use client";
 
 // Who may read the dossier: private, shared with named people, or public; and the people, by e-mail.
-import { useState } from "react";
+import { useId, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -14,6 +14,7 @@ type Props = { dossierId: number; version: number; visibility: DossierVisibility
 
 export function DossierSharing({ dossierId, version, visibility, shares }: Props) {
   const { busy, problem, run } = useDossierCall();
+  const emailId = useId();
   const [email, setEmail] = useState("");
   const [done, setDone] = useState<string | null>(null);
 
@@ -66,9 +67,10 @@ export function DossierSharing({ dossierId, version, visibility, shares }: Props
                 variant="quiet"
                 className="px-3 py-1 text-xs"
                 disabled={busy}
+                aria-label={`Stop sharing with ${s.name}`}
                 onClick={() => putShares(shares.filter((x) => x.userId !== s.userId).map((x) => x.email), `No longer shared with ${s.email}.`)}
               >
-                Stop sharing with {s.name}
+                Stop sharing
               </Button>
             </li>
           ))}
@@ -76,10 +78,12 @@ export function DossierSharing({ dossierId, version, visibility, shares }: Props
       )}
       {visibility === "private" && shares.length > 0 && <p className="mt-1 text-sm text-ink-soft">While the dossier is private, these people cannot open it.</p>}
       <form onSubmit={share} className="mt-3 flex flex-wrap items-end gap-2">
-        <label className="flex grow flex-col gap-1 text-sm font-semibold text-ink-soft">
-          Share with (e-mail address of an account)
-          <input type="email" value={email} onChange={(e) => setEmail(e.target.value)} className={inputClass} autoComplete="off" />
-        </label>
+        <div className="flex grow flex-col gap-1">
+          <label htmlFor={emailId} className="text-sm font-semibold text-ink-soft">
+            Share with (e-mail address of an account)
+          </label>
+          <input id={emailId} type="email" value={email} onChange={(e) => setEmail(e.target.value)} className={inputClass} autoComplete="off" />
+        </div>
         <Button type="submit" disabled={busy || !email.trim()}>
           Share
         </Button>

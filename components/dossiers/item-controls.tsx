@@ -1,7 +1,7 @@
 "use client";
 
 // The owner's controls on one item: write or change its note, take it out of the dossier.
-import { useState } from "react";
+import { useId, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -12,6 +12,7 @@ const small = "px-3 py-1 text-xs";
 
 export function ItemControls({ dossierId, itemId, version, note, label }: { dossierId: number; itemId: number; version: number; note: string | null; label: string }) {
   const { busy, problem, run } = useDossierCall();
+  const noteId = useId();
   const [editing, setEditing] = useState(false);
   const [confirming, setConfirming] = useState(false);
   const [text, setText] = useState(note ?? "");
@@ -27,10 +28,10 @@ export function ItemControls({ dossierId, itemId, version, note, label }: { doss
     <div className="mt-2 print:hidden">
       {editing ? (
         <form onSubmit={saveNote} className="grid gap-2">
-          <label className="flex flex-col gap-1 text-sm font-semibold text-ink-soft">
+          <label htmlFor={noteId} className="text-sm font-semibold text-ink-soft">
             Note on {label}
-            <textarea rows={3} value={text} onChange={(e) => setText(e.target.value)} className={inputClass} />
           </label>
+          <textarea id={noteId} rows={3} value={text} onChange={(e) => setText(e.target.value)} className={inputClass} />
           <div className="flex gap-2">
             <Button type="submit" className={small} disabled={busy}>
               Save the note

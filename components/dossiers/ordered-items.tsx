@@ -34,9 +34,14 @@ export function OrderedItems({ dossierId, entries, editable, children }: { dossi
     if (from === to || to < 0 || to >= order.length) return;
     const next = moved(order, from, to);
     setPending({ signature, order: next });
-    setSaid(`${entries[order[from]].label} moved to place ${to + 1} of ${order.length}.`);
+    const what = entries[order[from]].label;
+    setSaid(`Saving: ${what} to place ${to + 1}…`);
     const ok = await run(() => api(`/api/dossiers/${dossierId}/order`, { body: { items: next.map((i) => ({ id: entries[i].id, version: entries[i].version })) } }));
-    if (!ok) setPending(null);
+    if (ok) setSaid(`Saved: ${what} is now in place ${to + 1} of ${order.length}.`);
+    else {
+      setPending(null);
+      setSaid("");
+    }
   }
 
   return (
@@ -89,7 +94,7 @@ export function OrderedItems({ dossierId, entries, editable, children }: { dossi
           </li>
         ))}
       </ol>
-      <p aria-live="polite" className="sr-only">
+      <p role="status" className="mt-2 text-sm text-ink-soft print:hidden">
         {said}
       </p>
       {problem && (
