@@ -41,6 +41,10 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/regions/[id]/propose": { POST: "contributor" },
   "/api/regions/[id]/withdraw": { POST: "contributor" },
   "/api/regions/[id]/review": { POST: "editor" },
+  "/api/regions/[id]/comments": { GET: "reader", POST: "contributor" },
+  "/api/review/desk": { GET: "editor" },
+  "/api/account/notifications": { GET: "reader", PATCH: "reader" },
+  "/api/admin/notifications/digest": { POST: "admin" },
 };
 
 const ROLES = ["reader", "contributor", "editor", "admin"] as const;
