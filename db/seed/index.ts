@@ -7,6 +7,7 @@ import * as schema from "../schema";
 import { seedAreas } from "./areas";
 import { seedSources } from "./sources";
 import { DEMO_ACCOUNTS, DEMO_COLLECTIONS } from "./scenario";
+import { seedVocabulary } from "./vocabulary";
 
 const url = process.env.DATABASE_URL;
 if (!url) throw new Error("DATABASE_URL is not set");
@@ -43,6 +44,7 @@ try {
     }
     if (account.role === "admin") admin = id!;
   }
+  await seedVocabulary(db);
   for (const collection of DEMO_COLLECTIONS) {
     const [existing] = await db
       .select({ id: schema.collections.id })

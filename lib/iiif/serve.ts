@@ -10,6 +10,7 @@ import { NotFoundError } from "@/lib/errors";
 import { cacheKey, originalKey, previewKey, tilesPrefix } from "@/lib/images/keys";
 import { getImageForViewer } from "@/lib/images/queries";
 import { downloadTo, getObject, putObject } from "@/lib/storage/objects";
+import { iiifRightsUri } from "@/lib/exports/context";
 import { infoJson, type InfoJson } from "./info";
 import { parseImageRequest, type ImageRequest, type ImageRequestPath } from "./request";
 import { scaleFactorsFor, sizesFor } from "./tiles";
@@ -43,7 +44,8 @@ export async function imageInfo(actor: Actor | null, imageId: number): Promise<{
     sizes: sizesFor(image.width!, image.height!, scaleFactors).filter((s) => s.width * s.height <= LIMITS.maxArea),
     extraFeatures: [...ROUTE_FEATURES],
     ...LIMITS,
-    rights: image.rightsUri ?? undefined,
+    // IIIF asks for the http form of Creative Commons and RightsStatements.org URIs.
+    rights: iiifRightsUri(image.rightsUri) ?? undefined,
   });
   return { info, published: image.source.state === "published" };
 }

@@ -45,7 +45,8 @@ export async function selectRegionViews(tx: Executor, actor: Actor | null, where
     .orderBy(asc(regionVersions.boxY), asc(regionVersions.boxX), asc(regions.id));
   const obs = await observationsOf(tx, rows.map((r) => r.versionId));
   return rows.map((r) => {
-    const shownWhich = r.versionId === r.workingVersionId ? "working" : "vetted";
+    const shownWhich = r.versionId === r.vettedVersionId ? "vetted" : "working";
+    const isWorking = r.versionId === r.workingVersionId;
     const hasVetted = r.vettedVersionId !== null;
     const view = {
       id: r.id,
@@ -66,7 +67,7 @@ export async function selectRegionViews(tx: Executor, actor: Actor | null, where
       createdAt: r.createdAt.toISOString(),
       updatedAt: r.updatedAt.toISOString(),
     } as const;
-    return { ...view, can: regionPermissions(actor, { authorId: r.authorId, state: r.versionState, hasVetted, shown: shownWhich }) };
+    return { ...view, can: regionPermissions(actor, { authorId: r.authorId, state: r.versionState, hasVetted, isWorking }) };
   });
 }
 
@@ -81,6 +82,7 @@ export async function listRegionsOfImage(actor: Actor | null, imageId: number, o
 /** The regions of every photograph of a source the caller may see (for exports and the stringing check). */
 export async function listRegionsOfSource(actor: Actor | null, sourceId: number, opts: RegionVisibility = {}): Promise<RegionView[]> {
   authorize(actor, "archive.read");
+  if (opts.proposed) authorize(actor, "archive.read_proposed");
   return selectRegionViews(db(), actor, eq(images.sourceId, sourceId), opts);
 }
 

@@ -42,7 +42,7 @@ export type RegionView = {
   version: number;
   /** The review state of the version shown. */
   state: RegionState;
-  /** Which version this view shows: the author's working copy or the last vetted one. */
+  /** Which version this view shows: the last vetted one, or a working copy not (yet) vetted. */
   shown: "working" | "vetted";
   versionNumber: number;
   shape: RegionShape;

@@ -24,10 +24,12 @@ export function shownVersionId(actor: Actor | null, opts: RegionVisibility = {})
 
 export function regionPermissions(
   actor: Actor | null,
-  region: { authorId: number; state: RegionState; hasVetted: boolean; shown: "working" | "vetted" },
+  region: { authorId: number; state: RegionState; hasVetted: boolean; isWorking: boolean },
 ): RegionPermissions {
   const own = { authorId: region.authorId };
-  const working = region.shown === "working";
+  // Only the working version can be acted on; a reader looking at the vetted one while a revision is
+  // in progress acts on nothing.
+  const working = region.isWorking;
   return {
     edit: working && can(actor, "region.edit", own),
     propose: working && can(actor, "region.propose", own) && ["draft", "returned", "withdrawn"].includes(region.state),

@@ -45,6 +45,16 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/review/desk": { GET: "editor" },
   "/api/account/notifications": { GET: "reader", PATCH: "reader" },
   "/api/admin/notifications/digest": { POST: "admin" },
+  "/api/regions/[id]/annotation": { GET: "public" },
+  "/api/images/[id]/annotations": { GET: "public" },
+  "/api/sources/[id]/stringing": { GET: "public" },
+  "/api/vocabulary": { GET: "public", POST: "editor" },
+  "/api/vocabulary/order": { POST: "editor" },
+  "/api/vocabulary/aspects/[id]": { PATCH: "editor", DELETE: "editor" },
+  "/api/vocabulary/aspects/[id]/terms": { POST: "editor" },
+  "/api/vocabulary/aspects/[id]/order": { POST: "editor" },
+  "/api/vocabulary/terms/[id]": { PATCH: "editor", DELETE: "editor" },
+  "/api/vocabulary/terms/[id]/merge": { POST: "editor" },
 };
 
 const ROLES = ["reader", "contributor", "editor", "admin"] as const;

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { SourceImages } from "@/components/images/source-images";
+import { SourceEvidence } from "@/components/regions/source-evidence";
 import { SourceAdminActions } from "@/components/sources/source-admin-actions";
 import { SourceHistory } from "@/components/sources/source-history";
 import { Notice } from "@/components/ui/notice";
@@ -12,7 +13,11 @@ import { rightsLabel } from "@/lib/catalogue/rights";
 import { datingMargins } from "@/lib/config";
 import { readDating } from "@/lib/dating";
 import { NotFoundError } from "@/lib/errors";
+import { listImagesOfSource } from "@/lib/images/queries";
+import { listRegionsOfSource } from "@/lib/regions/queries";
+import { stringingInput } from "@/lib/regions/stringing";
 import { getSource, getSourceHistory } from "@/lib/sources/queries";
+import { checkStringing } from "@/lib/stringing";
 import { attributionInWords, OBJECT_TYPE_LABELS } from "@/lib/sources/vocab";
 
 type Props = { params: Promise<{ id: string }> };
@@ -22,7 +27,9 @@ async function load(id: string) {
   const n = Number(id);
   if (!Number.isInteger(n) || n <= 0) notFound();
   try {
-    return { actor, source: await getSource(actor, n), history: await getSourceHistory(actor, n) };
+    const source = await getSource(actor, n);
+    const [history, regions, images] = await Promise.all([getSourceHistory(actor, n), listRegionsOfSource(actor, n), listImagesOfSource(actor, n)]);
+    return { actor, source, history, regions, hasImages: images.some((i) => i.state === "ready") };
   } catch (error) {
     if (error instanceof NotFoundError) notFound();
     throw error;
@@ -46,7 +53,7 @@ function Field({ label, children }: { label: string; children: React.ReactNode }
 }
 
 export default async function SourcePage({ params }: Props) {
-  const { actor, source, history } = await load((await params).id);
+  const { actor, source, history, regions, hasImages } = await load((await params).id);
   const dating = source.datingEdtf ? readDating(source.datingEdtf, datingMargins()) : null;
   const mayEdit = !source.deletedAt && can(actor, "source.edit", { ownerId: source.createdBy });
   const dims = source.height || source.width ? `${source.height ?? "?"} × ${source.width ?? "?"} ${source.dimensionUnit}` : null;
@@ -70,6 +77,7 @@ export default async function SourcePage({ params }: Props) {
       </header>
       {source.deletedAt && <Notice tone="warn">This source was deleted on {source.deletedAt.toISOString().slice(0, 10)}. Only administrators see it; they can restore it.</Notice>}
       <SourceImages sourceId={source.id} canUpload={mayEdit && can(actor, "image.upload", { ownerId: source.createdBy })} canReprocess={can(actor, "image.reprocess")} />
+      <SourceEvidence sourceId={source.id} regionCount={regions.length} stringing={checkStringing(stringingInput(regions))} hasImages={hasImages} />
       <dl className="mb-8">
         <Field label="Date">
           {dating?.ok ? (
