@@ -98,11 +98,9 @@ export async function listDesk(actor: Actor | null, q: DeskQuery): Promise<DeskP
 }
 
 /** The region an editor should look at next: the longest waiting one under the filters that is not theirs. */
-export async function nextOnDesk(actor: Actor | null, q: Pick<DeskQuery, "aspect" | "source" | "contributor">, skip?: number): Promise<number | null> {
+export async function nextOnDesk(actor: Actor | null, q: Pick<DeskQuery, "aspect" | "source" | "contributor">): Promise<number | null> {
   authorize(actor, "review.read_desk");
-  const conditions = [deskWhere(actor!, q), ne(regions.authorId, actor!.id)];
-  if (skip) conditions.push(ne(regions.id, skip));
-  const [row] = await from().where(and(...conditions)).orderBy(asc(regions.proposedAt), asc(regions.id)).limit(1);
+  const [row] = await from().where(and(deskWhere(actor!, q), ne(regions.authorId, actor!.id))).orderBy(asc(regions.proposedAt), asc(regions.id)).limit(1);
   return row?.regionId ?? null;
 }
 

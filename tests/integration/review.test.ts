@@ -196,6 +196,27 @@ describe("the review cycle", () => {
   });
 });
 
+describe("the desk's pages", () => {
+  it("walks every proposed region of the source oldest first, a page at a time, with the same total", async () => {
+    const all = await json<DeskPage>(await call(`/api/review/desk?source=${sourceId}&limit=100`, { jar: editor }));
+    expect(all.entries.length).toBeGreaterThanOrEqual(2);
+    expect(all.total).toBe(all.entries.length);
+    const times = all.entries.map((e) => e.proposedAt);
+    expect([...times].sort()).toEqual(times);
+    const walked: number[] = [];
+    let after: string | null = null;
+    do {
+      const page: DeskPage = await json<DeskPage>(await call(`/api/review/desk?source=${sourceId}&limit=1${after ? `&after=${after}` : ""}`, { jar: editor }));
+      expect(page.entries.length).toBe(1);
+      expect(page.total).toBe(all.total);
+      walked.push(page.entries[0].regionId);
+      after = page.next;
+    } while (after);
+    expect(walked).toEqual(all.entries.map((e) => e.regionId));
+    expect((await call(`/api/review/desk?after=damaged`, { jar: editor })).status).toBe(400);
+  });
+});
+
 describe("notices by the daily digest, or none", () => {
   it("gathers one letter with every notice for a daily reader, sends nothing to one who chose none", async () => {
     const daily = await invitedUser("editor", admin);
@@ -209,9 +230,12 @@ describe("notices by the daily digest, or none", () => {
     await waitForMail(DEMO.editor, new RegExp(`awaits review`), start);
     expect(await countMail(daily.email)).toBe(1); // the invitation
 
-    const run = await call("/api/admin/notifications/digest", { jar: admin, json: {} });
-    expect(run.status).toBe(200);
-    expect(await json(run)).toMatchObject({ letters: expect.any(Number), failed: 0 });
+    // Two runs at once (as two app instances at 06:00 would) claim rows with SKIP LOCKED: one letter, not two.
+    const runs = await Promise.all([1, 2].map(() => call("/api/admin/notifications/digest", { jar: admin, json: {} })));
+    expect(runs.map((r) => r.status)).toEqual([200, 200]);
+    const counted = await Promise.all(runs.map((r) => json<{ letters: number; notifications: number; failed: number }>(r)));
+    expect(counted.every((c) => c.failed === 0)).toBe(true);
+    expect(counted.reduce((n, c) => n + c.notifications, 0)).toBeGreaterThanOrEqual(2);
     const digest: Mail = await waitForMail(daily.email, /^Cordarium digest: 2 notices$/, start);
     expect(digest.text).toContain(`region ${first.id}`);
     expect(digest.text).toContain(`region ${second.id}`);
