@@ -1,54 +1,25 @@
 // Peer review through the API as the demo accounts: a contributor proposes a region, editors are told by
-// e-mail as they chose (each at once, a daily digest, or not at all), an editor returns it with a comment,
-// the author revises it, the desk and the review page show what changed, an editor vets it and readers
-// see it; nobody decides on their own work, stale versions are refused, and each region has a discussion.
+// e-mail, an editor returns it with a comment, the author revises it, the desk and the review page show
+// what changed, an editor vets it and readers see it; nobody decides on their own work, stale versions
+// are refused, and each region has a discussion whose earlier participants are told of new comments.
 import { beforeAll, describe, expect, it } from "vitest";
 import type { RegionView } from "@/lib/regions/types";
 import type { ThreadEntry } from "@/lib/regions/discussion-schema";
 import type { DeskPage } from "@/lib/review/desk-schema";
-import { call, countMail, DEMO, invitedUser, MAILBOX, signedIn, waitForMail, type Jar, type Mail } from "../support/app";
+import { call, DEMO, invitedUser, MAILBOX, signedIn, waitForMail, type Jar, type Mail } from "../support/app";
 import { photographedSource, vocabulary, type Vocabulary } from "../support/evidence";
+import { json, markRegion, pageText, propose, since } from "../support/review";
 
 let contributor: Jar, editor: Jar, reader: Jar, admin: Jar;
 let vocab: Vocabulary;
 let sourceId: number, imageId: number, sourceTitle: string;
 
-const json = async <T = RegionView>(res: Response) => (await res.json()) as T;
-const since = () => new Date(Date.now() - 50);
-
 const technique = (term: string, confidence = "probable") => ({ aspectId: vocab.aspect("right_hand_technique"), termId: vocab.term("right_hand_technique", term), confidence });
 const pegs = (n: number) => ({ aspectId: vocab.aspect("peg_count"), count: n, confidence: "certain" });
-
-async function region(jar: Jar, body: Record<string, unknown>): Promise<RegionView> {
-  const res = await call(`/api/images/${imageId}/regions`, { jar, json: { shape: { kind: "rectangle", x: 200, y: 300, w: 400, h: 300 }, ...body } });
-  expect(res.status, await res.clone().text()).toBe(201);
-  return json(res);
-}
-
-async function propose(jar: Jar, r: RegionView): Promise<RegionView> {
-  const res = await call(`/api/regions/${r.id}/propose`, { jar, json: { version: r.version } });
-  expect(res.status, await res.clone().text()).toBe(200);
-  return json(res);
-}
-
+const region = (jar: Jar, body: Record<string, unknown>) => markRegion(jar, imageId, body);
 const review = (jar: Jar, id: number, body: Record<string, unknown>) => call(`/api/regions/${id}/review`, { jar, json: body });
 const get = async (jar: Jar, id: number) => json(await call(`/api/regions/${id}`, { jar }));
 const desk = async (jar: Jar, query = "") => json<DeskPage>(await call(`/api/review/desk?source=${sourceId}${query}`, { jar }));
-
-/** The text a browser shows for a server-rendered page, for checks of what the review page says. */
-async function pageText(jar: Jar, path: string): Promise<{ status: number; text: string }> {
-  const res = await call(path, { jar });
-  const html = await res.text();
-  const body = html.replace(/<script[\s\S]*?<\/script>/g, " ").replace(/<!-- -->/g, "").replace(/<[^>]+>/g, " ");
-  return { status: res.status, text: body.replace(/&quot;/g, '"').replace(/&#x27;/g, "'").replace(/&amp;/g, "&").replace(/\s+/g, " ") };
-}
-
-async function choose(jar: Jar, notify: "immediate" | "daily" | "off") {
-  const { version } = await json<{ version: number }>(await call("/api/account/notifications", { jar }));
-  const res = await call("/api/account/notifications", { jar, method: "PATCH", json: { version, notify } });
-  expect(res.status, await res.clone().text()).toBe(200);
-  return json<{ notify: string; version: number; waiting: number }>(res);
-}
 
 beforeAll(async () => {
   [contributor, editor, reader, admin] = await Promise.all([signedIn(DEMO.contributor), signedIn(DEMO.editor), signedIn(DEMO.reader), signedIn(DEMO.admin)]);
@@ -56,32 +27,6 @@ beforeAll(async () => {
   ({ sourceId, imageId } = await photographedSource(contributor, 1600, 1200));
   sourceTitle = (await json<{ source: { title: string } }>(await call(`/api/sources/${sourceId}`, { jar: contributor }))).source.title;
 }, 120_000);
-
-describe("notification preferences", () => {
-  it("are each person's own, default to each notice at once, and change only with the version read", async () => {
-    const person = await invitedUser("reader", admin);
-    const jar = await signedIn(person.email, person.password);
-    const first = await json<{ notify: string; version: number; waiting: number }>(await call("/api/account/notifications", { jar }));
-    expect(first).toMatchObject({ notify: "immediate", waiting: 0 });
-
-    const changed = await call("/api/account/notifications", { jar, method: "PATCH", json: { version: first.version, notify: "daily" } });
-    expect(await json(changed)).toMatchObject({ notify: "daily", version: first.version + 1 });
-
-    const stale = await call("/api/account/notifications", { jar, method: "PATCH", json: { version: first.version, notify: "off" } });
-    expect(stale.status).toBe(409);
-    expect(await json(stale)).toMatchObject({ error: { code: "version_conflict", current: { notify: "daily" } } });
-
-    const bad = await call("/api/account/notifications", { jar, method: "PATCH", json: { version: first.version + 1, notify: "hourly" } });
-    expect(bad.status).toBe(400);
-    expect(await json(bad)).toMatchObject({ error: { code: "invalid_input", fields: { notify: [expect.any(String)] } } });
-    expect(await json(await call("/api/account/notifications", { jar }))).toMatchObject({ notify: "daily" });
-
-    const { events } = await json<{ events: { action: string; before: { notify: string }; after: { notify: string } }[] }>(
-      await call(`/api/admin/audit?entityType=user&entityId=${person.id}`, { jar: admin }),
-    );
-    expect(events.find((e) => e.action === "user.notifications_changed")).toMatchObject({ before: { notify: "immediate" }, after: { notify: "daily" } });
-  });
-});
 
 describe("the review cycle", () => {
   let proposed: RegionView;
@@ -214,49 +159,6 @@ describe("the desk's pages", () => {
     } while (after);
     expect(walked).toEqual(all.entries.map((e) => e.regionId));
     expect((await call(`/api/review/desk?after=damaged`, { jar: editor })).status).toBe(400);
-  });
-});
-
-describe("notices by the daily digest, or none", () => {
-  it("gathers one letter with every notice for a daily reader, sends nothing to one who chose none", async () => {
-    const daily = await invitedUser("editor", admin);
-    const off = await invitedUser("editor", admin);
-    await choose(await signedIn(daily.email, daily.password), "daily");
-    await choose(await signedIn(off.email, off.password), "off");
-    const start = since();
-    const first = await propose(contributor, await region(contributor, { observations: [technique("strumming")] }));
-    const second = await propose(contributor, await region(contributor, { observations: [pegs(12)] }));
-    // The immediate editor's letters show that the proposals went out; the daily one only gets a digest.
-    await waitForMail(DEMO.editor, new RegExp(`awaits review`), start);
-    expect(await countMail(daily.email)).toBe(1); // the invitation
-
-    // Two runs at once (as two app instances at 06:00 would) claim rows with SKIP LOCKED: one letter, not two.
-    const runs = await Promise.all([1, 2].map(() => call("/api/admin/notifications/digest", { jar: admin, json: {} })));
-    expect(runs.map((r) => r.status)).toEqual([200, 200]);
-    const counted = await Promise.all(runs.map((r) => json<{ letters: number; notifications: number; failed: number }>(r)));
-    expect(counted.every((c) => c.failed === 0)).toBe(true);
-    expect(counted.reduce((n, c) => n + c.notifications, 0)).toBeGreaterThanOrEqual(2);
-    const digest: Mail = await waitForMail(daily.email, /^Cordarium digest: 2 notices$/, start);
-    expect(digest.text).toContain(`region ${first.id}`);
-    expect(digest.text).toContain(`region ${second.id}`);
-    expect(digest.text.indexOf(`region ${first.id}`)).toBeLessThan(digest.text.indexOf(`region ${second.id}`));
-
-    // A second run finds nothing waiting: no second letter.
-    expect((await call("/api/admin/notifications/digest", { jar: admin, json: {} })).status).toBe(200);
-    expect(await countMail(daily.email)).toBe(2);
-    expect(await countMail(off.email)).toBe(1);
-    expect((await call("/api/admin/notifications/digest", { jar: editor, json: {} })).status).toBe(403);
-  });
-
-  it("sends what was waiting for the digest at once when the person switches to each notice at once", async () => {
-    const person = await invitedUser("editor", admin);
-    const jar = await signedIn(person.email, person.password);
-    await choose(jar, "daily");
-    const start = since();
-    const waiting = await propose(contributor, await region(contributor, { observations: [pegs(6)] }));
-    expect(await choose(jar, "immediate")).toMatchObject({ notify: "immediate", waiting: 1 });
-    const mail = await waitForMail(person.email, /awaits review/, start);
-    expect(mail.text).toContain(`region ${waiting.id}`);
   });
 });
 
