@@ -16,8 +16,10 @@ export async function checkObservations(tx: Executor, input: ObservationInput[],
   if (input.length === 0) return [];
   const aspectIds = [...new Set(input.map((o) => o.aspectId))];
   const termIds = [...new Set(input.map((o) => o.termId).filter((t): t is number => typeof t === "number"))];
-  const aspectRows = await tx.select().from(aspects).where(inArray(aspects.id, aspectIds));
-  const termRows = termIds.length ? await tx.select().from(aspectTerms).where(inArray(aspectTerms.id, termIds)) : [];
+  // Shared locks: a term merged or deprecated by an editor at this moment waits for this save, or this
+  // save sees the merge; a value never lands on a term that has just been merged away.
+  const aspectRows = await tx.select().from(aspects).where(inArray(aspects.id, aspectIds)).for("share");
+  const termRows = termIds.length ? await tx.select().from(aspectTerms).where(inArray(aspectTerms.id, termIds)).for("share") : [];
   const aspectById = new Map(aspectRows.map((a) => [a.id, a]));
   const termById = new Map(termRows.map((t) => [t.id, t]));
   const fields: FieldErrors = {};

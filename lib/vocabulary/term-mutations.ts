@@ -4,7 +4,7 @@ import { aspects, aspectTerms } from "@/db/schema";
 import { recordAudit } from "@/lib/audit/record";
 import { authorize, type Actor } from "@/lib/auth/policy";
 import { ConflictError, ValidationError } from "@/lib/errors";
-import { KIND_LABELS } from "./definition";
+import { KIND_LABELS } from "./kinds";
 import {
   duplicateTermKey,
   InUseError,
