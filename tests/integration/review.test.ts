@@ -159,6 +159,10 @@ describe("the desk's pages", () => {
     } while (after);
     expect(walked).toEqual(all.entries.map((e) => e.regionId));
     expect((await call(`/api/review/desk?after=damaged`, { jar: editor })).status).toBe(400);
+    // The page starts again from the first page under the same filters.
+    const damaged = await call(`/review?source=${sourceId}&after=damaged`, { jar: editor });
+    expect(damaged.status).toBe(307);
+    expect(damaged.headers.get("location")).toMatch(new RegExp(`/review\\?source=${sourceId}$`));
   });
 });
 

@@ -8,6 +8,7 @@ import { Notice } from "@/components/ui/notice";
 import { PageTitle } from "@/components/ui/page-title";
 import { can } from "@/lib/auth/policy";
 import { currentActor } from "@/lib/auth/session";
+import { ValidationError } from "@/lib/errors";
 import { deskFilterOptions, listDesk } from "@/lib/review/desk";
 import { deskFilterParams } from "@/lib/review/desk-schema";
 import { readDeskParams, type SearchParams } from "./search-params";
@@ -21,8 +22,13 @@ export default async function ReviewDeskPage({ searchParams }: { searchParams: S
     return <Notice tone="warn">The review desk is for editors. Your role ({actor.role}) does not include reviewing.</Notice>;
   }
   const { query, problem } = await readDeskParams(searchParams);
-  const [page, options] = await Promise.all([listDesk(actor, query), deskFilterOptions(actor)]);
   const filters = deskFilterParams(query).toString();
+  // A damaged page link starts again from the first page under the same filters.
+  const page = await listDesk(actor, query).catch((error) => {
+    if (error instanceof ValidationError && query.after) redirect(`/review${filters ? `?${filters}` : ""}`);
+    throw error;
+  });
+  const options = await deskFilterOptions(actor);
   const nextPage = new URLSearchParams(deskFilterParams(query));
   if (page.next) nextPage.set("after", page.next);
   const filtered = filters !== "";
