@@ -13,6 +13,7 @@ export function SiteHeader({ actor, devMail }: { actor: Actor | null; devMail: b
     { href: "/vocabulary", label: "Vocabulary" },
     // A reader's own studies: signed-in people only (visitors open public dossiers by their address).
     ...(can(actor, "dossier.manage") ? [{ href: "/dossiers", label: "Dossiers" }] : []),
+    ...(can(actor, "review.read_desk") ? [{ href: "/review", label: "Review desk" }] : []),
     ...(can(actor, "user.manage") ? [{ href: "/admin/users", label: "Users" }] : []),
     ...(can(actor, "audit.read") ? [{ href: "/admin/audit", label: "Audit trail" }] : []),
     ...(devMail ? [{ href: "/dev/mail", label: "Mailbox" }] : []),
