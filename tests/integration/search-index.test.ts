@@ -1,90 +1,18 @@
 // The search index fed through the outbox, seen through GET /api/search as each role sees it: vetted
 // regions reach it after the change, drafts only their author, proposed work only on request, facet
-// counts, revisions of vetted regions, renames of places and collections, a rebuild, and an outage of
-// the search service during which writes go on and after which the index catches up with every change.
-// The index is eventually consistent by design, so each check polls until it holds (no timings).
-import { execFile } from "node:child_process";
-import { promisify } from "node:util";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { RegionView } from "@/lib/regions/types";
-import { call, DEMO, service, signedIn, unique, type Jar } from "../support/app";
-import { photographedSource, vocabulary, type Vocabulary } from "../support/evidence";
+// counts, revisions of vetted regions, term labels and merges, renames of places and collections.
+import { beforeAll, describe, expect, it } from "vitest";
+import { call } from "../support/app";
+import { eventually, ids, searchAs, searchBench, token, type SearchBench } from "../support/search";
 
-type Hit = { id: string; regionId: number; copy: "vetted" | "working"; state: string; label: string | null; sourceTitle: string; place: string | null; collection: string | null; t_right_hand_technique?: string[] };
-type Answer = { hits: Hit[]; facetDistribution: Record<string, Record<string, number>>; total: number; labels: { placeId: Record<string, string> } };
-type Health = { ok: boolean; checks: Record<string, { status: string; error?: string }>; searchBacklog: { pending: number } | null };
-
-let contributor: Jar, editor: Jar, reader: Jar, admin: Jar;
-let vocab: Vocabulary;
-let imageId: number, sourceId: number, areaId: number, collectionId: number;
-
-/** A word no other test writes, so that a query finds only this test's regions. */
-const token = () => `zq${Math.random().toString(36).slice(2, 10)}`;
-
-async function searchAs(jar: Jar | undefined, query: string): Promise<Answer> {
-  const res = await call(`/api/search?${query}`, { jar });
-  expect(res.status, await res.clone().text()).toBe(200);
-  return (await res.json()) as Answer;
-}
-
-/** Polls until the check holds; the last failure is reported if it never does. */
-async function eventually<T>(read: () => Promise<T>, check: (value: T) => void, timeoutMs = 90_000): Promise<T> {
-  const end = Date.now() + timeoutMs;
-  for (;;) {
-    const value = await read();
-    try {
-      check(value);
-      return value;
-    } catch (error) {
-      if (Date.now() > end) throw error;
-    }
-    await new Promise((r) => setTimeout(r, 300));
-  }
-}
-
-const observe = (aspect: string, term: string, confidence = "certain") => ({ aspectId: vocab.aspect(aspect), termId: vocab.term(aspect, term), confidence });
-const courses = (n: number) => ({ aspectId: vocab.aspect("course_count"), count: n, confidence: "probable" });
-
-async function region(label: string, observations: unknown[]): Promise<RegionView> {
-  const res = await call(`/api/images/${imageId}/regions`, { jar: contributor, json: { shape: { kind: "rectangle", x: 10, y: 10, w: 200, h: 150 }, label, observations } });
-  expect(res.status, await res.clone().text()).toBe(201);
-  return (await res.json()) as RegionView;
-}
-
-async function act(jar: Jar, path: string, body: Record<string, unknown>, method = "POST"): Promise<RegionView> {
-  const res = await call(path, { jar, method, json: body });
-  expect(res.status, await res.clone().text()).toBe(200);
-  return (await res.json()) as RegionView;
-}
-
-const propose = (r: RegionView) => act(contributor, `/api/regions/${r.id}/propose`, { version: r.version });
-const decide = (r: RegionView, decision: "vetted" | "returned") => act(editor, `/api/regions/${r.id}/review`, { version: r.version, decision, comment: decision === "returned" ? "Look again at the hand." : undefined });
-const vetted = async (label: string, observations: unknown[]) => decide(await propose(await region(label, observations)), "vetted");
-
-const ids = (a: Answer) => a.hits.map((h) => `${h.regionId}:${h.copy}`).sort();
-
+let bench: SearchBench;
 beforeAll(async () => {
-  [contributor, editor, reader, admin] = await Promise.all([signedIn(DEMO.contributor), signedIn(DEMO.editor), signedIn(DEMO.reader), signedIn(DEMO.admin)]);
-  vocab = await vocabulary();
-  const area = await call("/api/places", { jar: editor, json: { name: unique("Search test area"), countryCode: "ES", latitude: 37.39, longitude: -5.98 } });
-  areaId = ((await area.json()) as { place: { id: number } }).place.id;
-  const coll = await call("/api/collections", { jar: contributor, json: { name: unique("Search test collection"), city: "Sevilla" } });
-  collectionId = ((await coll.json()) as { collection: { id: number } }).collection.id;
-  ({ sourceId, imageId } = await photographedSource(contributor, 1200, 900));
-  const source = ((await (await call(`/api/sources/${sourceId}`, { jar: contributor })).json()) as { source: { title: string; version: number } }).source;
-  const res = await call(`/api/sources/${sourceId}`, {
-    jar: contributor,
-    method: "PATCH",
-    json: { title: source.title, objectType: "painting", state: "published", datingEdtf: "1650~", placeId: areaId, collectionId, version: source.version },
-  });
-  expect(res.status, await res.clone().text()).toBe(200);
+  bench = await searchBench();
 }, 120_000);
-
-// Whatever happened, leave the search service running for the next test file.
-afterAll(() => service("start", "search"));
 
 describe("what reaches the index, and who finds it", { timeout: 120_000 }, () => {
   it("finds a vetted region, with its source's facets, for a visitor within a few seconds", async () => {
+    const { areaId, collectionId, observe, courses, vetted } = bench;
     const word = token();
     const r = await vetted(`right hand ${word}`, [observe("right_hand_technique", "strumming"), observe("instrument_type", "five_course_guitar"), courses(5)]);
     const answer = await eventually(() => searchAs(undefined, `q=${word}`), (a) => expect(ids(a)).toEqual([`${r.id}:vetted`]));
@@ -99,6 +27,7 @@ describe("what reaches the index, and who finds it", { timeout: 120_000 }, () =>
   });
 
   it("finds a draft only for its author, and forgets it once deleted", async () => {
+    const { contributor, editor, reader, admin, observe, region } = bench;
     const word = token();
     const draft = await region(`draft ${word}`, [observe("right_hand_technique", "plucking")]);
     await eventually(() => searchAs(contributor, `q=${word}`), (a) => expect(ids(a)).toEqual([`${draft.id}:working`]));
@@ -110,6 +39,7 @@ describe("what reaches the index, and who finds it", { timeout: 120_000 }, () =>
   });
 
   it("shows readers proposed work only when they ask for it, and then only proposed work", async () => {
+    const { contributor, editor, reader, observe, region, propose, decide, vetted } = bench;
     const word = token();
     const proposed = await propose(await region(`proposed ${word}`, [observe("posture", "seated")]));
     const returned = await decide(await propose(await region(`returned ${word}`, [observe("posture", "standing")])), "returned");
@@ -130,6 +60,7 @@ describe("what reaches the index, and who finds it", { timeout: 120_000 }, () =>
   });
 
   it("counts facets over what the caller may see", async () => {
+    const { contributor, reader, areaId, observe, courses, region, propose, vetted } = bench;
     const word = token();
     await vetted(`a ${word}`, [observe("right_hand_technique", "strumming"), observe("instrument_type", "five_course_guitar"), courses(5)]);
     await vetted(`b ${word}`, [observe("right_hand_technique", "strumming", "possible"), observe("instrument_type", "lute")]);
@@ -160,6 +91,7 @@ describe("what reaches the index, and who finds it", { timeout: 120_000 }, () =>
   });
 
   it("keeps the vetted version for readers while its author revises it", async () => {
+    const { contributor, editor, reader, observe, act, propose, vetted } = bench;
     const word = token();
     const r = await vetted(`revised ${word}`, [observe("right_hand_technique", "strumming")]);
     await eventually(() => searchAs(reader, `q=${word}`), (a) => expect(ids(a)).toEqual([`${r.id}:vetted`]));
@@ -178,6 +110,7 @@ describe("what reaches the index, and who finds it", { timeout: 120_000 }, () =>
   });
 
   it("follows a term's new label, and a merge of terms, into the documents that name it", async () => {
+    const { editor, vocab, vetted } = bench;
     const word = token();
     const aspectId = vocab.aspect("right_hand_technique");
     const created = await call(`/api/vocabulary/aspects/${aspectId}/terms`, { jar: editor, json: { key: word, label: `thumb brush ${word}` } });
@@ -199,6 +132,7 @@ describe("what reaches the index, and who finds it", { timeout: 120_000 }, () =>
   });
 
   it("carries renames of the place and the collection into the documents of their sources' regions", async () => {
+    const { contributor, editor, areaId, collectionId, observe, vetted } = bench;
     const word = token();
     const r = await vetted(`renamed ${word}`, [observe("setting", "tavern")]);
     await eventually(() => searchAs(undefined, `q=${word}`), (a) => expect(ids(a)).toEqual([`${r.id}:vetted`]));
@@ -216,90 +150,3 @@ describe("what reaches the index, and who finds it", { timeout: 120_000 }, () =>
   });
 });
 
-describe("when the search service is away", () => {
-  it("takes every change, reports the outage and the backlog, and catches up with no change lost", async () => {
-    const word = token();
-    const kept = await vetted(`kept ${word}`, [observe("right_hand_technique", "strumming")]);
-    const removed = await vetted(`removed ${word}`, [observe("right_hand_technique", "plucking")]);
-    await eventually(() => searchAs(undefined, `q=${word}`), (a) => expect(ids(a)).toEqual([`${kept.id}:vetted`, `${removed.id}:vetted`].sort()));
-
-    service("stop", "search");
-    let fresh: RegionView, draft: RegionView;
-    const title = `Tavern scene ${token()}`;
-    try {
-      fresh = await vetted(`fresh ${word}`, [observe("setting", "street")]);
-      draft = await region(`draft ${word}`, [observe("setting", "court")]);
-      await act(contributor, `/api/regions/${kept.id}`, { version: kept.version, label: `kept and edited ${word}` }, "PATCH");
-      expect((await call(`/api/regions/${removed.id}`, { jar: admin, method: "DELETE", json: { version: removed.version } })).status).toBe(200);
-      const source = ((await (await call(`/api/sources/${sourceId}`, { jar: contributor })).json()) as { source: { version: number } }).source;
-      const saved = await call(`/api/sources/${sourceId}`, {
-        jar: contributor,
-        method: "PATCH",
-        json: { title, objectType: "painting", state: "published", datingEdtf: "1650~", placeId: areaId, collectionId, version: source.version },
-      });
-      expect(saved.status).toBe(200);
-
-      const health = await call("/api/health");
-      const body = (await health.json()) as Health;
-      expect(health.status).toBe(503);
-      expect(body.checks.search.status).toBe("error");
-      expect(body.checks.search.error).toMatch(/changes? waiting for the index/);
-      expect(body.checks.database.status).toBe("ok");
-      expect(body.searchBacklog!.pending).toBeGreaterThanOrEqual(5);
-      const refused = await call(`/api/search?q=${word}`);
-      expect(refused.status).toBe(503);
-      expect(await refused.json()).toMatchObject({ error: { code: "search_unavailable" } });
-    } finally {
-      service("start", "search");
-    }
-
-    await eventually(() => searchAs(undefined, `q=${word}`), (a) => expect(ids(a)).toEqual([`${fresh.id}:vetted`, `${kept.id}:vetted`].sort()));
-    await eventually(
-      () => searchAs(contributor, `q=${word}`),
-      (a) => expect(ids(a)).toEqual([`${fresh.id}:vetted`, `${kept.id}:working`, `${draft.id}:working`].sort()),
-    );
-    const author = await searchAs(contributor, `q=${word}`);
-    expect(author.hits.find((h) => h.regionId === kept.id)!.label).toBe(`kept and edited ${word}`);
-    // The source's new title reached the documents of its regions, including one made before the outage.
-    await eventually(
-      () => searchAs(undefined, `q=${title.split(" ").pop()}`),
-      (a) => expect(a.hits.filter((h) => [fresh.id, kept.id].includes(h.regionId)).map((h) => h.sourceTitle)).toEqual([title, title]),
-    );
-    await eventually(
-      () => call("/api/health").then(async (res) => ({ status: res.status, body: (await res.json()) as Health })),
-      ({ status, body }) => {
-        expect(status).toBe(200);
-        expect(body.searchBacklog!.pending).toBe(0);
-      },
-    );
-  }, 240_000);
-});
-
-describe("rebuilding the indexes", () => {
-  it("npm run reindex rebuilds both from the database, swaps them in and clears the outbox", async () => {
-    const word = token();
-    const r = await vetted(`rebuilt ${word}`, [observe("right_hand_technique", "strumming")]);
-    const draft = await region(`rebuilt draft ${word}`, [observe("right_hand_technique", "plucking")]);
-    const { stdout: output } = await promisify(execFile)("npm", ["run", "--silent", "reindex"], { encoding: "utf8" });
-    expect(output).toMatch(/Rebuilt in [\d.]+ s: \d+ sources and \d+ region documents/);
-    // The swap has happened when the command returns: both regions are there at once, each for its audience.
-    expect(ids(await searchAs(undefined, `q=${word}`))).toEqual([`${r.id}:vetted`]);
-    expect(ids(await searchAs(contributor, `q=${word}`))).toEqual([`${r.id}:vetted`, `${draft.id}:working`].sort());
-    const sources = await searchAs(undefined, `scope=sources&q=${word}`);
-    expect(sources.total).toBe(0);
-  }, 120_000);
-
-  it("an admin queues the same rebuild as a job and reads how it went", async () => {
-    const res = await call("/api/admin/reindex", { jar: admin, method: "POST" });
-    expect(res.status).toBe(202);
-    const { jobId } = (await res.json()) as { jobId: number };
-    const status = await eventually(
-      async () => (await (await call("/api/admin/reindex", { jar: admin })).json()) as { lastRebuild: { id: number; state: string } | null; backlog: { pending: number } },
-      (s) => expect(s.lastRebuild).toMatchObject({ id: jobId, state: "done" }),
-    );
-    expect(status.backlog.pending).toBeGreaterThanOrEqual(0);
-    const audit = (await (await call(`/api/admin/audit?entityType=search_index`, { jar: admin })).json()) as { events: { action: string }[] };
-    expect(audit.events[0].action).toBe("search.reindex_requested");
-    expect((await call("/api/admin/reindex", { jar: reader, method: "POST" })).status).toBe(403);
-  }, 120_000);
-});
