@@ -9,6 +9,8 @@ export function SiteHeader({ actor, devMail }: { actor: Actor | null; devMail: b
     { href: "/sources", label: "Sources" },
     { href: "/collections", label: "Collections" },
     { href: "/places", label: "Places" },
+    // The vocabulary explains the terms of the evidence to everyone; editors also change it there.
+    { href: "/vocabulary", label: "Vocabulary" },
     ...(can(actor, "user.manage") ? [{ href: "/admin/users", label: "Users" }] : []),
     ...(can(actor, "audit.read") ? [{ href: "/admin/audit", label: "Audit trail" }] : []),
     ...(devMail ? [{ href: "/dev/mail", label: "Mailbox" }] : []),

@@ -1,10 +1,8 @@
 import { index, int, mysqlEnum, mysqlTable, text, timestamp, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { ASPECT_KINDS, ASPECT_SECTIONS } from "../../lib/vocabulary/kinds";
 import { id, ref, timestamps, version } from "./columns";
 
-/** How an aspect's value is given: a term from its list, a whole number, or free text. */
-export const ASPECT_KINDS = ["terms", "count", "text"] as const;
-/** The headings the vocabulary is grouped under. */
-export const ASPECT_SECTIONS = ["instrument", "player", "context", "reliability"] as const;
+export { ASPECT_KINDS, ASPECT_SECTIONS };
 
 // One kind of evidence a region can carry ("right-hand technique", "peg count"). Editors manage them;
 // `key` is stable (exports and the stringing check name aspects by it), the label may change.
@@ -46,5 +44,4 @@ export const aspectTerms = mysqlTable(
 
 export type Aspect = typeof aspects.$inferSelect;
 export type AspectTerm = typeof aspectTerms.$inferSelect;
-export type AspectKind = (typeof ASPECT_KINDS)[number];
-export type AspectSection = (typeof ASPECT_SECTIONS)[number];
+export type { AspectKind, AspectSection } from "../../lib/vocabulary/kinds";

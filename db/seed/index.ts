@@ -72,6 +72,9 @@ try {
     // Loaded only when needed: the drawing code is large.
     const { seedDemoImages } = await import("./demo-images");
     await seedDemoImages(db, contributor.id);
+    // After the pictures (their rows carry the pixel size) and the vocabulary (observations name it).
+    const { seedDemoRegions } = await import("./demo-regions");
+    await seedDemoRegions(db);
   }
   console.log("demo scenario ready");
 } finally {

@@ -1,7 +1,7 @@
 // The evidence vocabulary the archive starts with: what a marked region can say about the instrument,
 // the player, the scene and how far the picture can be trusted. Pure data, seeded by key; editors
 // extend and reword it afterwards. Labels are the words players and organologists use.
-import type { AspectKind, AspectSection } from "@/db/schema/vocabulary";
+import type { AspectKind, AspectSection } from "./kinds";
 
 export type TermDefinition = { key: string; label: string; description: string };
 export type AspectDefinition = {
@@ -147,16 +147,3 @@ const BY_SECTION: Record<AspectSection, Seed[]> = { instrument: INSTRUMENT, play
 export const VOCABULARY: AspectDefinition[] = (Object.keys(BY_SECTION) as AspectSection[]).flatMap((section) =>
   BY_SECTION[section].map((seed) => ({ ...seed, section })),
 );
-
-export const SECTION_LABELS: Record<AspectSection, string> = {
-  instrument: "Instrument",
-  player: "Player",
-  context: "Context",
-  reliability: "Reliability",
-};
-
-export const KIND_LABELS: Record<AspectKind, string> = {
-  terms: "a term from the list",
-  count: "a count",
-  text: "free text",
-};

@@ -15,7 +15,7 @@ import {
   refuseDuplicateAspectKey,
   sameMembers,
 } from "./guards";
-import { KIND_LABELS } from "./definition";
+import { KIND_LABELS } from "./kinds";
 import { aspectUsage, getAspectView, getSectionViews } from "./queries";
 import type { AspectCreate, AspectOrder, AspectUpdate } from "./schemas";
 import type { AspectView } from "./types";

@@ -1,7 +1,7 @@
 // The shapes editors send when they change the vocabulary: the forms check them in the browser, the API
 // on the server. A key is fixed at creation (exports and checks name aspects and terms by it).
 import { z } from "zod";
-import { ASPECT_KINDS, ASPECT_SECTIONS } from "@/db/schema/vocabulary";
+import { ASPECT_KINDS, ASPECT_SECTIONS } from "./kinds";
 
 const blankToNull = (v: unknown) => (typeof v === "string" && v.trim() === "" ? null : v);
 
@@ -25,14 +25,16 @@ const positionSchema = z.number().int().min(0).max(100_000);
 const kindSchema = z.enum(ASPECT_KINDS, { error: "Choose how the value is given: a term, a count or text." });
 const sectionSchema = z.enum(ASPECT_SECTIONS, { error: "Choose a section." });
 
-export const aspectCreateSchema = z.object({
-  key: keySchema,
+// What the aspect form edits; a new aspect adds its key.
+export const aspectFieldsSchema = z.object({
   label: labelSchema,
   description: descriptionSchema.default(null),
   kind: kindSchema,
   section: sectionSchema,
-  position: positionSchema.optional(),
 });
+export type AspectFields = z.output<typeof aspectFieldsSchema>;
+
+export const aspectCreateSchema = aspectFieldsSchema.extend({ key: keySchema, position: positionSchema.optional() });
 export type AspectCreate = z.output<typeof aspectCreateSchema>;
 
 // Deprecation travels with the other fields, so that it carries the same version check.
@@ -47,12 +49,10 @@ export const aspectUpdateSchema = z.object({
 });
 export type AspectUpdate = z.output<typeof aspectUpdateSchema>;
 
-export const termCreateSchema = z.object({
-  key: keySchema,
-  label: labelSchema,
-  description: descriptionSchema.default(null),
-  position: positionSchema.optional(),
-});
+export const termFieldsSchema = z.object({ label: labelSchema, description: descriptionSchema.default(null) });
+export type TermFields = z.output<typeof termFieldsSchema>;
+
+export const termCreateSchema = termFieldsSchema.extend({ key: keySchema, position: positionSchema.optional() });
 export type TermCreate = z.output<typeof termCreateSchema>;
 
 export const termUpdateSchema = z.object({
@@ -87,3 +87,14 @@ export type TermOrder = z.output<typeof termOrderSchema>;
 export const listQuerySchema = z.object({ all: z.enum(["0", "1"]).optional() });
 
 export const idSchema = z.coerce.number().int().positive();
+
+/** A key suggested from a label: "Thumb over the neck" → thumb_over_the_neck. */
+export function keyFromLabel(label: string): string {
+  return label
+    .normalize("NFD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "_")
+    .replace(/^_+|_+$/g, "")
+    .slice(0, 60);
+}

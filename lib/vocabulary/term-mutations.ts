@@ -5,7 +5,7 @@ import { recordAudit } from "@/lib/audit/record";
 import { authorize, type Actor } from "@/lib/auth/policy";
 import { ConflictError, ValidationError } from "@/lib/errors";
 import { outboxRegionsUsingTerm } from "@/lib/search/outbox";
-import { KIND_LABELS } from "./definition";
+import { KIND_LABELS } from "./kinds";
 import {
   duplicateTermKey,
   InUseError,

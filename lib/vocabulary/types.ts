@@ -1,5 +1,5 @@
 // What the vocabulary API answers, for pages, forms and the region editor alike (no server code here).
-import type { AspectKind, AspectSection } from "@/db/schema/vocabulary";
+import type { AspectKind, AspectSection } from "./kinds";
 
 export type TermView = {
   id: number;
