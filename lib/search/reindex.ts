@@ -4,13 +4,13 @@ import { db, pool } from "@/db/client";
 import { sources } from "@/db/schema";
 import { search } from "./client";
 import { buildBatch, sendBatch } from "./delivery";
-import { ensureIndex, INDEX_KINDS, liveIndex, succeeded, TASK_WAIT } from "./indexes";
+import { ensureIndex, INDEX_KINDS, liveIndex, succeeded, TASK_WAIT, type IndexKind } from "./indexes";
 
 export type ReindexProgress = { done: number; total: number; regions: number; sources: number };
 export type ReindexResult = ReindexProgress & { cleared: number; requeued: number };
 
 const PAGE = 100;
-const fresh = (kind: string) => `${liveIndex(kind as "regions")}__rebuild`;
+const fresh = (kind: IndexKind) => `${liveIndex(kind)}__rebuild`;
 
 /**
  * Rebuilds both indexes from the database without taking search away: every live source and its
@@ -49,7 +49,10 @@ async function rebuild(onProgress: (p: ReindexProgress) => void): Promise<Reinde
   const [snapshot] = (await db().execute(sql`SELECT id, revision FROM search_outbox WHERE delivered_at IS NULL`)) as unknown as [{ id: number; revision: number }[]];
 
   for (const kind of INDEX_KINDS) {
-    await search().deleteIndexIfExists(fresh(kind));
+    // Left over from a rebuild that stopped halfway; deleting an index that is not there is a task
+    // that fails with index_not_found, which is fine.
+    const gone = await search().deleteIndex(fresh(kind)).waitTask(TASK_WAIT);
+    if (gone.status !== "succeeded" && gone.error?.code !== "index_not_found") succeeded(gone);
     await ensureIndex(kind, fresh(kind));
   }
   const [{ total }] = await db().select({ total: sql<number>`COUNT(*)` }).from(sources).where(isNull(sources.deletedAt));
