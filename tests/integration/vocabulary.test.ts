@@ -1,7 +1,8 @@
 // The evidence vocabulary through its API: the public list, editors' changes with versions, refusals
 // that change nothing, deletion only while unused, and merges that rewrite the observations of real
 // regions (made through the regions API on a processed photograph).
-import { execFileSync } from "node:child_process";
+import { execFile } from "node:child_process";
+import { promisify } from "node:util";
 import { beforeAll, describe, expect, it } from "vitest";
 import { VOCABULARY } from "@/lib/vocabulary/definition";
 import type { AspectView, TermView } from "@/lib/vocabulary/types";
@@ -264,7 +265,9 @@ describe("vocabulary in use", () => {
 
 describe("seeding again", () => {
   // The seed runs at every start: it must add what is missing and nothing else.
-  const seed = () => execFileSync("node", ["--import", "tsx", "db/seed/index.ts"], { env: { ...process.env, CORDARIUM_SEED_IMAGES: "0" }, stdio: "pipe" });
+  // Run without blocking this process: a seed of more than five seconds would otherwise outlast the
+  // app's keep-alive, and the next request would go out on a socket the app has closed.
+  const seed = () => promisify(execFile)("node", ["--import", "tsx", "db/seed/index.ts"], { env: { ...process.env, CORDARIUM_SEED_IMAGES: "0" } });
 
   it("keeps editors' wording and order, and does not bring back a term an editor deleted", async () => {
     const support = (await list(editor, true)).find((a) => a.key === "support")!;
@@ -275,7 +278,7 @@ describe("seeding again", () => {
     expect(reworded.status).toBe(200);
     expect((await call(`/api/vocabulary/terms/${table.id}`, { jar: editor, method: "DELETE", json: { version: table.version } })).status).toBe(200);
 
-    seed();
+    await seed();
     const after = (await list(editor, true)).find((a) => a.key === "support")!;
     expect(after.terms.map((t) => t.key)).toEqual(support.terms.filter((t) => t.key !== "table").map((t) => t.key));
     expect(after.terms.find((t) => t.key === "knee")!.label).toBe("knee or thigh");
