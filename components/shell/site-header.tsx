@@ -13,6 +13,8 @@ export function SiteHeader({ actor, devMail }: { actor: Actor | null; devMail: b
     { href: "/vocabulary", label: "Vocabulary" },
     // Anyone may lay regions side by side; what each sees is decided by the table's query.
     { href: "/light-table", label: "Light table" },
+    // A reader's own studies: signed-in people only (visitors open public dossiers by their address).
+    ...(can(actor, "dossier.manage") ? [{ href: "/dossiers", label: "Dossiers" }] : []),
     ...(can(actor, "user.manage") ? [{ href: "/admin/users", label: "Users" }] : []),
     ...(can(actor, "audit.read") ? [{ href: "/admin/audit", label: "Audit trail" }] : []),
     ...(devMail ? [{ href: "/dev/mail", label: "Mailbox" }] : []),

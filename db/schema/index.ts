@@ -11,3 +11,4 @@ export * from "./jobs";
 export * from "./vocabulary";
 export * from "./regions";
 export * from "./notifications";
+export * from "./dossiers";

@@ -51,6 +51,14 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/vocabulary/aspects/[id]/order": { POST: "editor" },
   "/api/vocabulary/terms/[id]": { PATCH: "editor", DELETE: "editor" },
   "/api/vocabulary/terms/[id]/merge": { POST: "editor" },
+  "/api/dossiers": { GET: "reader", POST: "reader" },
+  "/api/dossiers/[id]": { GET: "public", PATCH: "reader", DELETE: "reader" },
+  "/api/dossiers/[id]/restore": { POST: "reader" },
+  "/api/dossiers/[id]/items": { POST: "reader" },
+  "/api/dossiers/[id]/items/[itemId]": { PATCH: "reader", DELETE: "reader" },
+  "/api/dossiers/[id]/order": { POST: "reader" },
+  "/api/dossiers/[id]/shares": { PUT: "reader" },
+  "/api/dossiers/[id]/export.csv": { GET: "public" },
 };
 
 const ROLES = ["reader", "contributor", "editor", "admin"] as const;
