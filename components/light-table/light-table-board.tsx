@@ -11,6 +11,7 @@ import { CROP_HEIGHTS, lightTableHref, moveRegion, type CropSize } from "@/lib/l
 import type { LightTableItem } from "@/lib/light-table/types";
 import { panBy, PAN_STEP, WHOLE_VIEW, zoomIn, zoomOut, zoomTo, type SharedView } from "@/lib/light-table/view";
 import { KeepAsSelection } from "./keep-as-selection";
+import { SaveAsDossier } from "./save-as-dossier";
 import { TableControls } from "./table-controls";
 import { TableItem } from "./table-item";
 
@@ -20,9 +21,11 @@ type Props = {
   requested: number[];
   size: CropSize;
   proposed: boolean;
+  /** Signed-in readers and up keep dossiers; visitors get no button they could not use. */
+  canSaveDossier: boolean;
 };
 
-export function LightTableBoard({ items, requested, size: initialSize, proposed }: Props) {
+export function LightTableBoard({ items, requested, size: initialSize, proposed, canSaveDossier }: Props) {
   const router = useRouter();
   const pathname = usePathname();
   const hintId = useId();
@@ -106,6 +109,7 @@ export function LightTableBoard({ items, requested, size: initialSize, proposed 
         hintId={hintId}
       >
         <KeepAsSelection order={order} />
+        {canSaveDossier && order.length > 0 && <SaveAsDossier order={order} nameOf={nameOf} />}
       </TableControls>
       <p aria-live="polite" className="sr-only">
         {announcement}

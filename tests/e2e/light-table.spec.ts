@@ -4,6 +4,7 @@ import { DEMO, signedIn, unique } from "../support/app";
 import { photographedSource, vocabulary } from "../support/evidence";
 import { regionAt } from "../support/light-table";
 import { LightTablePage, type Geometry } from "./pages/light-table-page";
+import { expectSignedIn, SignInPage } from "./pages/sign-in-page";
 
 // Four vetted regions of different proportions on one photograph, laid out for a visitor.
 const boxes = {
@@ -17,6 +18,7 @@ type Name = keyof typeof boxes;
 test.use({ viewport: { width: 1280, height: 1400 } });
 const labels = Object.fromEntries(Object.keys(boxes).map((k) => [k, unique(k)])) as Record<Name, string>;
 const ids = {} as Record<Name, number>;
+const pending = { label: unique("pending"), id: 0 };
 
 test.beforeAll(async () => {
   test.setTimeout(120_000);
@@ -28,6 +30,8 @@ test.beforeAll(async () => {
     const region = await regionAt({ author: contributor, editor }, imageId, "vetted", { box: boxes[name], label: labels[name], observations: [strumming] });
     ids[name] = region.id;
   }
+  const proposed = await regionAt({ author: contributor, editor }, imageId, "proposed", { box: { x: 10, y: 10, w: 80, h: 80 }, label: pending.label, observations: [strumming] });
+  pending.id = proposed.id;
 });
 
 /** Every crop shows the same zoom and the same relative window: the picture's scale and offset as shares of the crop agree. */
@@ -143,4 +147,43 @@ test("copies the table's link", async ({ page, context }) => {
   await table.controls.getByRole("button", { name: "Copy link" }).click();
   await expect(table.controls.getByText("Link copied.")).toBeVisible();
   expect(await page.evaluate(() => navigator.clipboard.readText())).toBe(page.url());
+});
+
+test("keeps the table as the regions gathered in this browser, and opens them again from an empty table", async ({ page }) => {
+  const table = new LightTablePage(page);
+  await table.open(lightTableHref([ids.rose, ids.hand]), 2);
+  await table.controls.getByRole("button", { name: "Keep as my selection" }).click();
+  await expect(table.controls.getByRole("button", { name: "This is your selection" })).toBeDisabled();
+  await page.goto("/light-table");
+  await expect(page.getByText("No regions on the table yet")).toBeVisible();
+  await page.getByRole("link", { name: "Lay out your gathered regions (2)" }).click();
+  await expect(table.items).toHaveCount(2);
+  expect(table.regionIdsInUrl()).toEqual([ids.rose, ids.hand]);
+});
+
+test("a reader saves the table as a dossier in its order; proposed work is left out and named", async ({ page }) => {
+  const signIn = new SignInPage(page);
+  await signIn.open();
+  await signIn.withPassword(DEMO.reader);
+  await expectSignedIn(page, "reader");
+  const table = new LightTablePage(page);
+  await table.open(lightTableHref([ids.hand, pending.id, ids.rose, ids.pegbox], { proposed: true }), 4);
+  await expect(table.item(pending.label).getByTestId("review-state")).toHaveText("Proposed, not yet reviewed");
+
+  const title = unique("Right hands compared");
+  await table.controls.getByRole("button", { name: "Save as dossier" }).click();
+  const form = page.getByRole("form", { name: "Save the table as a dossier" });
+  await form.getByRole("button", { name: "Save" }).click();
+  await expect(form.getByText("Give the dossier a title.")).toBeVisible();
+  await form.getByLabel("Title of the dossier").fill(title);
+  await form.getByRole("button", { name: "Save" }).click();
+  await expect(form.getByText("Saved with 3 regions.")).toBeVisible();
+  await expect(form.getByText(`“${pending.label}”`)).toBeVisible();
+  await form.getByRole("link", { name: `Open “${title}”` }).click();
+  await expect(page).toHaveURL(/\/dossiers\/\d+$/);
+  const dossierId = Number(new URL(page.url()).pathname.split("/").pop());
+  const res = await page.request.get(`/api/dossiers/${dossierId}`);
+  const { dossier } = (await res.json()) as { dossier: { title: string; items: { kind: string; region?: { id: number } }[] } };
+  expect(dossier.title).toBe(title);
+  expect(dossier.items.map((i) => i.region?.id)).toEqual([ids.hand, ids.rose, ids.pegbox]);
 });

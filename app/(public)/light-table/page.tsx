@@ -80,7 +80,7 @@ export default async function LightTablePage({ searchParams }: Props) {
           <p>None of the regions in this link can be shown to you.</p>
         </EmptyState>
       ) : (
-        <LightTableBoard items={items} requested={selection.ids} size={size} proposed={proposed} />
+        <LightTableBoard items={items} requested={selection.ids} size={size} proposed={proposed} canSaveDossier={can(actor, "dossier.manage")} />
       )}
     </div>
   );
