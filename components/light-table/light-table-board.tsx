@@ -5,7 +5,7 @@
 // order or height replaces the link (router.replace), so what is on screen is always what a copied link
 // opens. Regions the server did not show stay at the end of the link, so that a table passed on keeps
 // them for someone who may see them.
-import { usePathname, useRouter } from "next/navigation";
+import { useRouter } from "next/navigation";
 import { useCallback, useId, useMemo, useState, type KeyboardEvent } from "react";
 import { CROP_HEIGHTS, lightTableHref, moveRegion, type CropSize } from "@/lib/light-table/links";
 import type { LightTableItem } from "@/lib/light-table/types";
@@ -27,7 +27,6 @@ type Props = {
 
 export function LightTableBoard({ items, requested, size: initialSize, proposed, canSaveDossier }: Props) {
   const router = useRouter();
-  const pathname = usePathname();
   const hintId = useId();
   const byId = useMemo(() => new Map(items.map((i) => [i.regionId, i])), [items]);
   const shownKey = items.map((i) => i.regionId).join(",");
@@ -49,11 +48,9 @@ export function LightTableBoard({ items, requested, size: initialSize, proposed,
   const hiddenIds = useMemo(() => requested.filter((id) => !byId.has(id)), [requested, byId]);
   const publish = useCallback(
     (nextOrder: number[], nextSize: CropSize) => {
-      const href = lightTableHref([...nextOrder, ...hiddenIds], { size: nextSize, proposed });
-      // The page may be mounted elsewhere one day; keep its own path.
-      router.replace(href.replace(/^\/light-table/, pathname), { scroll: false });
+      router.replace(lightTableHref([...nextOrder, ...hiddenIds], { size: nextSize, proposed }), { scroll: false });
     },
-    [router, pathname, hiddenIds, proposed],
+    [router, hiddenIds, proposed],
   );
 
   const shown = order.map((id) => byId.get(id)).filter((i): i is LightTableItem => Boolean(i));

@@ -187,3 +187,14 @@ test("a reader saves the table as a dossier in its order; proposed work is left 
   expect(dossier.title).toBe(title);
   expect(dossier.items.map((i) => i.region?.id)).toEqual([ids.hand, ids.rose, ids.pegbox]);
 });
+
+test("a visitor's rearranged table keeps the regions it cannot show at the end of the link, until asked to leave them out", async ({ page }) => {
+  const table = new LightTablePage(page);
+  await table.open(lightTableHref([ids.rose, pending.id, ids.hand]), 2);
+  await expect(page.getByText("1 region is not shown: it does not exist or you may not see it.")).toBeVisible();
+  await page.getByRole("button", { name: `Move “${labels.hand}” left` }).click();
+  await expect.poll(() => table.regionIdsInUrl()).toEqual([ids.hand, ids.rose, pending.id]);
+  await page.getByRole("link", { name: "Leave them out of the link" }).click();
+  await expect.poll(() => table.regionIdsInUrl()).toEqual([ids.hand, ids.rose]);
+  await expect(page.getByText(/not shown/)).toHaveCount(0);
+});

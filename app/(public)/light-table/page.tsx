@@ -47,7 +47,7 @@ export default async function LightTablePage({ searchParams }: Props) {
     <div>
       <PageTitle title="Light table" lead={lead}>
         {mayOptIn && (
-          <Link href={lightTableHref([...shownIds, ...selection.ids.filter((id) => !shownIds.includes(id))], { size, proposed: !proposed })} className="text-sm font-semibold print:hidden">
+          <Link href={lightTableHref(selection.ids, { size, proposed: !proposed })} className="text-sm font-semibold print:hidden">
             {proposed ? "Show vetted work only" : "Include proposed work (not yet reviewed)"}
           </Link>
         )}
