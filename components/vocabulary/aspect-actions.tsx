@@ -29,7 +29,7 @@ export function AspectActions({ aspect, order }: { aspect: AspectView; order: Or
   };
 
   return (
-    <div className="mt-3 grid gap-2">
+    <div className="mt-3 grid gap-2 border-t-2 border-rule pt-3">
       <div className="flex flex-wrap items-center gap-2">
         <Button type="button" variant="quiet" className={smallButton} aria-label={`Edit ${aspect.label}`} onClick={() => toggle("edit")}>
           Edit aspect

@@ -15,8 +15,8 @@ function Flag({ children }: { children: ReactNode }) {
 function TermLine({ term, aspect, editable }: { term: TermView; aspect: AspectView; editable: boolean }) {
   const into = term.mergedIntoId ? aspect.terms.find((t) => t.id === term.mergedIntoId) : undefined;
   const candidates = aspect.terms.filter((t) => t.id !== term.id && !t.deprecated).map((t) => ({ id: t.id, label: t.label }));
-  return (
-    <li className={`border-t border-rule py-2 ${term.deprecated ? "text-ink-soft" : ""}`}>
+  const words = (
+    <>
       <div className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
         <span className="font-semibold">{term.label}</span>
         <code className="font-mono text-xs text-ink-faint">{term.key}</code>
@@ -24,8 +24,16 @@ function TermLine({ term, aspect, editable }: { term: TermView; aspect: AspectVi
         {editable && term.usage !== undefined && <span className="text-xs text-ink-soft">{usagePhrase(term.usage)}</span>}
       </div>
       {term.description && <p className="text-sm">{term.description}</p>}
-      {editable && (
-        <TermActions term={term} aspect={{ id: aspect.id, label: aspect.label }} order={aspect.terms.map((t) => ({ id: t.id, version: t.version }))} candidates={candidates} />
+    </>
+  );
+  return (
+    <li className={`border-t border-rule py-2 ${term.deprecated ? "text-ink-soft" : ""}`}>
+      {editable ? (
+        <TermActions term={term} aspect={{ id: aspect.id, label: aspect.label }} order={aspect.terms.map((t) => ({ id: t.id, version: t.version }))} candidates={candidates}>
+          {words}
+        </TermActions>
+      ) : (
+        words
       )}
     </li>
   );

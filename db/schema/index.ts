@@ -11,3 +11,5 @@ export * from "./jobs";
 export * from "./vocabulary";
 export * from "./regions";
 export * from "./notifications";
+export * from "./dossiers";
+export * from "./search-outbox";

@@ -21,6 +21,8 @@ const connection = await mysql.createConnection({ uri: url, timezone: "Z" });
 const db = drizzle(connection, { schema, mode: "default" });
 
 try {
+  // Whole seconds: columns filled by DEFAULT now() hold whole seconds too.
+  const [[{ seedStart }]] = (await connection.query("SELECT NOW() AS seedStart")) as unknown as [[{ seedStart: Date }]];
   const passwordHash = await hashPassword(password);
   let admin: number | null = null;
   for (const account of DEMO_ACCOUNTS) {
@@ -76,6 +78,18 @@ try {
     const { seedDemoRegions } = await import("./demo-regions");
     await seedDemoRegions(db);
   }
+  // The seed writes rows directly, not through the mutations that queue search updates: queue what it
+  // added or changed (a source brings its photographs' regions along), so the index catches up.
+  await connection.query(
+    `INSERT INTO search_outbox (entity_type, entity_id, next_attempt_at)
+     SELECT 'source', touched.id, NOW(3) FROM (
+       SELECT id FROM sources WHERE updated_at >= ?
+       UNION SELECT source_id FROM images WHERE updated_at >= ?
+       UNION SELECT i.source_id FROM regions r JOIN images i ON i.id = r.image_id WHERE r.updated_at >= ?
+     ) AS touched
+     ON DUPLICATE KEY UPDATE revision = search_outbox.revision + 1, next_attempt_at = NOW(3)`,
+    [seedStart, seedStart, seedStart],
+  );
   console.log("demo scenario ready");
 } finally {
   await connection.end();

@@ -5,6 +5,7 @@ import { collections } from "@/db/schema";
 import { recordAudit } from "@/lib/audit/record";
 import { authorize, type Actor } from "@/lib/auth/policy";
 import { ConflictError, NotFoundError, ValidationError } from "@/lib/errors";
+import { outboxSourcesOfCollection } from "@/lib/search/outbox";
 import type { CollectionFields } from "./schemas";
 
 async function refuseDuplicateName(tx: Executor, fields: CollectionFields, exceptId?: number) {
@@ -38,6 +39,7 @@ export async function updateCollection(actor: Actor | null, id: number, change: 
     await tx.update(collections).set({ ...fields, version: sql`${collections.version} + 1` }).where(and(eq(collections.id, id), eq(collections.version, version)));
     const [after] = await tx.select().from(collections).where(eq(collections.id, id));
     await recordAudit(tx, { actorId: actor!.id, action: "collection.updated", entityType: "collection", entityId: id, before, after });
+    await outboxSourcesOfCollection(tx, id);
     return after;
   });
 }

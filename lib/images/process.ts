@@ -9,6 +9,7 @@ import { images, type Job } from "@/db/schema";
 import { recordAudit } from "@/lib/audit/record";
 import { config } from "@/lib/config";
 import { PermanentJobError, type JobHandler } from "@/lib/jobs/worker";
+import { outbox } from "@/lib/search/outbox";
 import { deleteKeys, deletePrefix, downloadTo, putObject } from "@/lib/storage/objects";
 import { imagePrefix, originalKey, previewKey, thumbnailKey, tilesPrefix } from "./keys";
 import { dHash, toHex } from "./phash";
@@ -133,6 +134,7 @@ export async function processImage(imageId: number): Promise<void> {
         .where(eq(images.id, imageId));
       const [after] = await tx.select().from(images).where(eq(images.id, imageId));
       await recordAudit(tx, { actorId: null, action: "image.processed", entityType: "image", entityId: imageId, before: image, after });
+      await outbox(tx, "source", image.sourceId);
     });
   } catch (error) {
     // Nothing half-done: whatever this attempt wrote goes, so a retry starts clean.

@@ -3,7 +3,7 @@ import { and, eq, lt, sql } from "drizzle-orm";
 import { db, type Executor } from "@/db/client";
 import { jobs, type Job } from "@/db/schema";
 
-export type JobKind = "image.process" | "storage.sweep" | "notification.send" | "notification.digest";
+export type JobKind = "image.process" | "storage.sweep" | "notification.send" | "notification.digest" | "search.reindex";
 
 /** Adds a job inside the caller's transaction, so the job exists exactly when the change does. */
 export async function enqueue(tx: Executor, kind: JobKind, payload: Record<string, unknown>, opts: { runAt?: Date; maxAttempts?: number } = {}) {

@@ -5,6 +5,7 @@ import { places } from "@/db/schema";
 import { recordAudit } from "@/lib/audit/record";
 import { authorize, type Actor } from "@/lib/auth/policy";
 import { ConflictError, NotFoundError, ValidationError } from "@/lib/errors";
+import { outboxSourcesOfPlace } from "@/lib/search/outbox";
 import { foldName } from "./fold";
 import { findAreaNamed, getPlace } from "./queries";
 import type { AreaInput, AreaUpdate, PlaceRecord } from "./schemas";
@@ -91,6 +92,7 @@ export async function updateArea(actor: Actor | null, id: number, change: AreaUp
       .where(and(eq(places.id, id), eq(places.version, change.version)));
     const after = (await getPlace(id, tx))!;
     await recordAudit(tx, { actorId: actor!.id, action: "place.area_updated", entityType: "place", entityId: id, before, after });
+    await outboxSourcesOfPlace(tx, id);
     return after;
   });
 }

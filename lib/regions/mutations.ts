@@ -6,6 +6,7 @@ import { recordAudit } from "@/lib/audit/record";
 import { atLeast, authorize, type Actor } from "@/lib/auth/policy";
 import { ConflictError, NotFoundError, ValidationError } from "@/lib/errors";
 import { getImageForViewer } from "@/lib/images/queries";
+import { outbox } from "@/lib/search/outbox";
 import { boundingBox, fitShape } from "./geometry";
 import { checkObservations, copyObservations, observationSignature, observationsOf, writeObservations } from "./observations";
 import { notifyProposals } from "./letters";
@@ -52,6 +53,7 @@ export async function createRegion(actor: Actor | null, imageId: number, input: 
     await tx.update(regions).set({ workingVersionId: versionId }).where(eq(regions.id, id));
     await writeObservations(tx, versionId, checked);
     await recordAudit(tx, { actorId: actor!.id, action: "region.created", entityType: "region", entityId: id, after: await snapshot(tx, id) });
+    await outbox(tx, "region", id);
     return getRegion(actor, id, {}, tx);
   });
 }
@@ -112,6 +114,7 @@ export async function updateRegion(actor: Actor | null, id: number, change: Regi
     }
     await tx.update(regions).set(bump).where(eq(regions.id, id));
     await recordAudit(tx, { actorId: actor!.id, action: "region.updated", entityType: "region", entityId: id, before, after: await snapshot(tx, id) });
+    await outbox(tx, "region", id);
     return getRegion(actor, id, {}, tx);
   });
 }
@@ -128,6 +131,7 @@ export async function deleteRegion(actor: Actor | null, id: number, version: num
     const before = await snapshot(tx, id);
     await tx.update(regions).set({ deletedAt: new Date(), ...bump }).where(eq(regions.id, id));
     await recordAudit(tx, { actorId: actor!.id, action: "region.deleted", entityType: "region", entityId: id, before, after: await snapshot(tx, id) });
+    await outbox(tx, "region", id);
     return { version: region.version + 1 };
   });
 }
@@ -141,6 +145,7 @@ export async function restoreRegion(actor: Actor | null, id: number, version: nu
     if (region.version !== version) throw new ConflictError("This region changed after it was deleted; reload the page.");
     await tx.update(regions).set({ deletedAt: null, ...bump }).where(eq(regions.id, id));
     await recordAudit(tx, { actorId: actor!.id, action: "region.restored", entityType: "region", entityId: id, after: await snapshot(tx, id) });
+    await outbox(tx, "region", id);
     return getRegion(actor, id, {}, tx);
   });
 }
@@ -153,6 +158,7 @@ async function markProposed(tx: Transaction, actor: Actor, region: Region, worki
   const now = new Date();
   await tx.update(regionVersions).set({ state: "proposed", proposedAt: now }).where(eq(regionVersions.id, working.id));
   await tx.update(regions).set({ state: "proposed", proposedAt: now, ...bump }).where(eq(regions.id, region.id));
+  await outbox(tx, "region", region.id);
 }
 
 export async function proposeRegion(actor: Actor | null, id: number, version: number): Promise<RegionView> {
@@ -208,6 +214,7 @@ export async function withdrawRegion(actor: Actor | null, id: number, version: n
     await tx.update(regionVersions).set({ state: "withdrawn" }).where(eq(regionVersions.id, working.id));
     await tx.update(regions).set({ state: "withdrawn", proposedAt: null, ...bump }).where(eq(regions.id, id));
     await recordAudit(tx, { actorId: actor!.id, action: "region.withdrawn", entityType: "region", entityId: id, before, after: await snapshot(tx, id) });
+    await outbox(tx, "region", id);
     return getRegion(actor, id, {}, tx);
   });
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { asc, eq, inArray } from "drizzle-orm";
+import { asc, eq, inArray, sql } from "drizzle-orm";
 import type { Executor } from "@/db/client";
 import { aspects, aspectTerms, observations } from "@/db/schema";
 import { ValidationError, type FieldErrors } from "@/lib/errors";
@@ -16,8 +16,18 @@ export async function checkObservations(tx: Executor, input: ObservationInput[],
   if (input.length === 0) return [];
   const aspectIds = [...new Set(input.map((o) => o.aspectId))];
   const termIds = [...new Set(input.map((o) => o.termId).filter((t): t is number => typeof t === "number"))];
-  const aspectRows = await tx.select().from(aspects).where(inArray(aspects.id, aspectIds));
-  const termRows = termIds.length ? await tx.select().from(aspectTerms).where(inArray(aspectTerms.id, termIds)) : [];
+  // Locking reads in share mode (MariaDB has LOCK IN SHARE MODE, not FOR SHARE): they read the latest
+  // committed rows, and a term an editor merges or deprecates at this moment waits for this save (or
+  // this save waits for the merge and sees it), so a value never lands on a term just merged away.
+  const ids = (list: number[]) => sql.join(list.map((n) => sql`${n}`), sql`, `);
+  const [aspectRows] = (await tx.execute(
+    sql`SELECT id, label, kind, deprecated_at AS deprecatedAt FROM aspects WHERE id IN (${ids(aspectIds)}) LOCK IN SHARE MODE`,
+  )) as unknown as [{ id: number; label: string; kind: "terms" | "count" | "text"; deprecatedAt: Date | null }[]];
+  const [termRows] = termIds.length
+    ? ((await tx.execute(
+        sql`SELECT id, aspect_id AS aspectId, label, deprecated_at AS deprecatedAt FROM aspect_terms WHERE id IN (${ids(termIds)}) LOCK IN SHARE MODE`,
+      )) as unknown as [{ id: number; aspectId: number; label: string; deprecatedAt: Date | null }[]])
+    : [[]];
   const aspectById = new Map(aspectRows.map((a) => [a.id, a]));
   const termById = new Map(termRows.map((t) => [t.id, t]));
   const fields: FieldErrors = {};

@@ -7,6 +7,7 @@ import { authorize, type Actor } from "@/lib/auth/policy";
 import { ValidationError } from "@/lib/errors";
 import { notifyDecision } from "@/lib/regions/letters";
 import { lockRegion, regionSnapshot } from "@/lib/regions/mutations";
+import { outbox } from "@/lib/search/outbox";
 import { getRegion } from "@/lib/regions/queries";
 import type { ReviewDecision } from "@/lib/regions/schemas";
 import type { RegionView } from "@/lib/regions/types";
@@ -43,6 +44,7 @@ export async function decideRegion(actor: Actor | null, id: number, input: Revie
       after: { ...(await regionSnapshot(tx, id)), comment: input.comment ?? null },
     });
     await notifyDecision(tx, actor!, id, input.decision, input.comment ?? null);
+    await outbox(tx, "region", id);
     return getRegion(actor, id, {}, tx);
   });
 }

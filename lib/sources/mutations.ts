@@ -7,6 +7,7 @@ import { authorize, type Actor } from "@/lib/auth/policy";
 import { datingMargins } from "@/lib/config";
 import { readDating } from "@/lib/dating";
 import { ConflictError, NotFoundError, ValidationError } from "@/lib/errors";
+import { outbox } from "@/lib/search/outbox";
 import type { SourceFields, SourceUpdate } from "./schemas";
 
 type Row = typeof sources.$inferSelect;
@@ -44,6 +45,7 @@ export async function insertSource(tx: Executor, actor: Actor, fields: SourceFie
   const [{ id }] = await tx.insert(sources).values({ ...values, createdBy: actor.id }).$returningId();
   const [row] = await tx.select().from(sources).where(eq(sources.id, id));
   await recordAudit(tx, { actorId: actor.id, action, entityType: "source", entityId: id, after: row });
+  await outbox(tx, "source", id);
   return row;
 }
 
@@ -80,6 +82,7 @@ export async function updateSource(actor: Actor | null, id: number, change: Sour
       .where(and(eq(sources.id, id), eq(sources.version, version)));
     const [after] = await tx.select().from(sources).where(eq(sources.id, id));
     await recordAudit(tx, { actorId: actor!.id, action: "source.updated", entityType: "source", entityId: id, before, after });
+    await outbox(tx, "source", id);
     return after;
   });
 }
@@ -93,6 +96,7 @@ export async function deleteSource(actor: Actor | null, id: number, version: num
     await tx.update(sources).set({ deletedAt: new Date(), version: sql`${sources.version} + 1` }).where(and(eq(sources.id, id), isNull(sources.deletedAt)));
     const [after] = await tx.select().from(sources).where(eq(sources.id, id));
     await recordAudit(tx, { actorId: actor!.id, action: "source.deleted", entityType: "source", entityId: id, before, after });
+    await outbox(tx, "source", id);
     return after;
   });
 }
@@ -106,6 +110,7 @@ export async function restoreSource(actor: Actor | null, id: number, version: nu
     await tx.update(sources).set({ deletedAt: null, version: sql`${sources.version} + 1` }).where(eq(sources.id, id));
     const [after] = await tx.select().from(sources).where(eq(sources.id, id));
     await recordAudit(tx, { actorId: actor!.id, action: "source.restored", entityType: "source", entityId: id, before, after });
+    await outbox(tx, "source", id);
     return after;
   });
 }

@@ -4,6 +4,7 @@ import { aspectTerms, observations } from "@/db/schema";
 import { recordAudit } from "@/lib/audit/record";
 import { authorize, type Actor } from "@/lib/auth/policy";
 import { ConflictError, NotFoundError, ValidationError } from "@/lib/errors";
+import { outboxRegionsUsingTerm } from "@/lib/search/outbox";
 import { duplicateTermKey, inTransaction } from "./guards";
 import { getTermView, termReach } from "./queries";
 import type { MergeInput } from "./schemas";
@@ -37,6 +38,7 @@ export async function mergeTerm(actor: Actor | null, id: number, input: MergeInp
     if (into.deprecatedAt) throw refuse(`"${into.label}" is deprecated: reinstate it first, or choose a term in use.`);
 
     const reach = await termReach(tx, id);
+    await outboxRegionsUsingTerm(tx, id);
     await tx.update(observations).set({ termId: into.id }).where(eq(observations.termId, id));
     // Terms merged into A earlier now point at B, so that every chain is one step long.
     const [repointed] = (await tx.update(aspectTerms).set({ mergedIntoId: into.id }).where(eq(aspectTerms.mergedIntoId, id))) as unknown as [{ affectedRows: number }];

@@ -4,6 +4,7 @@ import { aspects, aspectTerms } from "@/db/schema";
 import { recordAudit } from "@/lib/audit/record";
 import { authorize, type Actor } from "@/lib/auth/policy";
 import { ConflictError, ValidationError } from "@/lib/errors";
+import { outboxRegionsUsingTerm } from "@/lib/search/outbox";
 import { KIND_LABELS } from "./kinds";
 import {
   duplicateTermKey,
@@ -68,6 +69,7 @@ export async function updateTerm(actor: Actor | null, id: number, change: TermUp
     const after = (await getTermView(tx, id))!;
     const action = change.deprecated === true && !row.deprecatedAt ? "term.deprecated" : change.deprecated === false && row.deprecatedAt ? "term.reinstated" : "term.updated";
     await recordAudit(tx, { actorId: actor!.id, action, entityType: "aspect_term", entityId: id, before, after });
+    if (after.label !== before.label) await outboxRegionsUsingTerm(tx, id);
     return after;
   }, duplicateTermKey);
 }

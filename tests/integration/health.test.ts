@@ -3,7 +3,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { call, service } from "../support/app";
 
-type Health = { ok: boolean; checks: Record<string, { status: string; error?: string }> };
+type Health = { ok: boolean; checks: Record<string, { status: string; error?: string }>; searchBacklog: { pending: number } | null };
 
 describe("health", () => {
   afterAll(() => service("start", "search"));
@@ -12,7 +12,11 @@ describe("health", () => {
     const res = await call("/api/health");
     const body = (await res.json()) as Health;
     expect(res.status).toBe(200);
-    expect(body).toEqual({ ok: true, checks: { database: { status: "ok" }, storage: { status: "ok" }, search: { status: "ok" }, mail: { status: "ok" } } });
+    expect(body).toEqual({
+      ok: true,
+      checks: { database: { status: "ok" }, storage: { status: "ok" }, search: { status: "ok" }, mail: { status: "ok" } },
+      searchBacklog: { pending: expect.any(Number), failing: expect.any(Number), oldestPendingSeconds: expect.toBeOneOf([null, expect.any(Number)]), lastError: expect.toBeOneOf([null, expect.any(String)]) },
+    });
   });
 
   it("is 503 naming search when the search service is down, and the archive still renders", async () => {

@@ -1,0 +1,40 @@
+// The caller's own search filters as Meilisearch filter expressions (pure). Keys and values were
+// checked by searchQuerySchema, so they can be quoted as they are.
+import { overlapQueryDays } from "@/lib/dating";
+import { ValidationError } from "@/lib/errors";
+import { dayNumber } from "./documents";
+import type { SearchQuery } from "./schemas";
+
+const quoted = (v: string | number) => (typeof v === "number" ? String(v) : `"${v}"`);
+const anyOf = (field: string, values: (string | number)[]) => (values.length ? [`${field} IN [${values.map(quoted).join(", ")}]`] : []);
+
+/** The filters a search asks for, ANDed after the visibility filter. */
+export function requestFilters(q: SearchQuery): string[] {
+  const out = [
+    ...anyOf("objectType", q.type),
+    ...anyOf("country", q.country),
+    ...anyOf("collectionId", q.collection),
+    ...anyOf("placeId", q.place),
+    ...anyOf("decade", q.decade),
+    ...anyOf("century", q.century),
+  ];
+  if (q.scope === "regions") {
+    for (const [aspect, terms] of Object.entries(q.terms)) out.push(...anyOf(`t_${aspect}`, terms));
+    for (const [aspect, counts] of Object.entries(q.counts)) out.push(...anyOf(`n_${aspect}`, counts));
+    out.push(...anyOf("confidence", q.confidence), ...anyOf("state", q.state));
+  }
+  if (q.from || q.to) {
+    let days: { fromDay: string | null; toDay: string | null };
+    try {
+      days = overlapQueryDays({ from: q.from ?? null, to: q.to ?? null });
+    } catch (error) {
+      throw new ValidationError(error instanceof Error ? error.message : "The date range is not valid.", { from: ["Check the date range."] });
+    }
+    // As in the source list: undated sources never match a date range; an open end matches its side.
+    out.push("dated = true");
+    if (days.toDay) out.push(`(dateFrom NOT EXISTS OR dateFrom <= ${dayNumber(days.toDay)})`);
+    if (days.fromDay) out.push(`(dateTo NOT EXISTS OR dateTo >= ${dayNumber(days.fromDay)})`);
+  }
+  return out;
+}
+

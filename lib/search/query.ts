@@ -1,0 +1,85 @@
+import "server-only";
+import { inArray } from "drizzle-orm";
+import { MeilisearchApiError, MeilisearchRequestError, MeilisearchRequestTimeOutError } from "meilisearch";
+import { db } from "@/db/client";
+import { collections, places } from "@/db/schema";
+import { authorize, type Actor } from "@/lib/auth/policy";
+import { AppError } from "@/lib/errors";
+import { search } from "./client";
+import type { RegionDocument, SourceDocument } from "./documents";
+import { requestFilters } from "./filters";
+import { liveIndex } from "./indexes";
+import type { SearchQuery, SearchSort } from "./schemas";
+import { regionVisibilityFilter, sourceVisibilityFilter } from "./visibility";
+
+export type FacetCounts = Record<string, Record<string, number>>;
+export type SearchAnswer<H> = {
+  hits: H[];
+  facetDistribution: FacetCounts;
+  /** Names of the collections and places that facets and filters name by id. */
+  labels: { collectionId: Record<string, string>; placeId: Record<string, string> };
+  total: number;
+  page: number;
+  perPage: number;
+  totalPages: number;
+};
+
+export class SearchUnavailableError extends AppError {
+  constructor() {
+    super(503, "search_unavailable", "Search is not available at the moment; browsing the archive still works. Try again shortly.");
+  }
+}
+
+// Facets a caller may see counted; the rest (author, flags the visibility filter reads) stay internal.
+const SHARED_FACETS = ["objectType", "country", "collectionId", "placeId", "decade", "century"];
+const REGION_FACETS = new Set([...SHARED_FACETS, "confidence", "state", "aspects"]);
+const isPublicFacet = (scope: SearchQuery["scope"], name: string) =>
+  scope === "regions" ? REGION_FACETS.has(name) || /^[tn]_[a-z0-9_]+$/.test(name) : SHARED_FACETS.includes(name);
+
+const SORTS: Record<SearchSort, string[]> = { relevance: [], date: ["dateFrom:asc"], date_desc: ["dateTo:desc"], recent: ["updatedAt:desc"] };
+
+async function labelsFor(facets: FacetCounts, q: SearchQuery): Promise<SearchAnswer<unknown>["labels"]> {
+  const ids = (field: string, chosen: number[]) => [...new Set([...Object.keys(facets[field] ?? {}).map(Number), ...chosen])].filter((n) => n > 0);
+  const collectionIds = ids("collectionId", q.collection);
+  const placeIds = ids("placeId", q.place);
+  const [cs, ps] = await Promise.all([
+    collectionIds.length ? db().select({ id: collections.id, name: collections.name, city: collections.city }).from(collections).where(inArray(collections.id, collectionIds)) : [],
+    placeIds.length ? db().select({ id: places.id, name: places.name }).from(places).where(inArray(places.id, placeIds)) : [],
+  ]);
+  return {
+    collectionId: Object.fromEntries(cs.map((c) => [String(c.id), c.city ? `${c.name}, ${c.city}` : c.name])),
+    placeId: Object.fromEntries(ps.map((p) => [String(p.id), p.name])),
+  };
+}
+
+/**
+ * Searches the evidence (regions) or the catalogue (sources). What the caller may see is added here,
+ * from the caller, to every query: a reader gets vetted regions of published sources, and proposed
+ * work only when asking for it.
+ */
+export async function searchArchive(actor: Actor | null, q: SearchQuery): Promise<SearchAnswer<RegionDocument | SourceDocument>> {
+  authorize(actor, "archive.read");
+  if (q.proposed) authorize(actor, "archive.read_proposed");
+  const visibility = q.scope === "regions" ? regionVisibilityFilter(actor, { proposed: q.proposed }) : sourceVisibilityFilter(actor);
+  const filter = [...visibility, ...requestFilters(q)];
+  let answer;
+  try {
+    answer = await search()
+      .index(liveIndex(q.scope))
+      .search(q.q || null, { filter, facets: ["*"], sort: SORTS[q.sort], page: q.page, hitsPerPage: q.perPage });
+  } catch (error) {
+    const missing = error instanceof MeilisearchApiError && error.cause?.code === "index_not_found";
+    if (missing || error instanceof MeilisearchRequestError || error instanceof MeilisearchRequestTimeOutError) throw new SearchUnavailableError();
+    throw error;
+  }
+  const facetDistribution = Object.fromEntries(Object.entries(answer.facetDistribution ?? {}).filter(([name]) => isPublicFacet(q.scope, name)));
+  return {
+    hits: answer.hits as (RegionDocument | SourceDocument)[],
+    facetDistribution,
+    labels: await labelsFor(facetDistribution, q),
+    total: answer.totalHits ?? 0,
+    page: answer.page ?? q.page,
+    perPage: answer.hitsPerPage ?? q.perPage,
+    totalPages: answer.totalPages ?? 0,
+  };
+}

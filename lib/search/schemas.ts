@@ -1,0 +1,58 @@
+// What a search asks for, checked with zod: the search form's address and GET /api/search both use it.
+// Lists may repeat a parameter (`country=ES&country=IT`) or separate values with commas.
+// Aspect facets are named as in the documents: `t_<aspect key>=<term key>`, `n_<aspect key>=<number>`.
+import { z } from "zod";
+import { CONFIDENCES, REGION_STATES } from "@/db/schema/regions";
+import { OBJECT_TYPES } from "@/lib/sources/vocab";
+
+const KEY = /^[a-z0-9_]{1,60}$/;
+const DATE_END = /^\d{1,4}(-\d{2}(-\d{2})?)?$/;
+export const SEARCH_SORTS = ["relevance", "date", "date_desc", "recent"] as const;
+export type SearchSort = (typeof SEARCH_SORTS)[number];
+
+const list = <T extends z.ZodType>(item: T) => z.array(item).max(50, "At most 50 values.").default([]);
+const positiveInt = z.coerce.number().int().positive();
+
+export const searchQuerySchema = z.object({
+  scope: z.enum(["regions", "sources"]).default("regions"),
+  q: z.string().trim().max(200, "At most 200 characters.").default(""),
+  terms: z.record(z.string().regex(KEY, "Not an aspect key."), list(z.string().regex(KEY, "Not a term key."))).default({}),
+  counts: z.record(z.string().regex(KEY, "Not an aspect key."), list(z.coerce.number().int().min(0).max(10_000))).default({}),
+  type: list(z.enum(OBJECT_TYPES, { error: "Not an object type." })),
+  country: list(z.string().trim().toUpperCase().regex(/^[A-Z]{2}$/, "Use two-letter country codes.")),
+  collection: list(positiveInt),
+  place: list(positiveInt),
+  decade: list(z.coerce.number().int().multipleOf(10, "A decade is named by its first year, e.g. 1640.")),
+  century: list(z.coerce.number().int().multipleOf(100, "A century is named by its first year, e.g. 1600.")),
+  confidence: list(z.enum(CONFIDENCES, { error: "Not a confidence." })),
+  state: list(z.enum(REGION_STATES, { error: "Not a review state." })),
+  from: z.string().regex(DATE_END, "Give a year such as 1620.").optional(),
+  to: z.string().regex(DATE_END, "Give a year such as 1700.").optional(),
+  proposed: z.boolean().default(false),
+  sort: z.enum(SEARCH_SORTS).default("relevance"),
+  page: positiveInt.max(500).default(1),
+  perPage: positiveInt.max(100).default(20),
+});
+
+export type SearchQuery = z.output<typeof searchQuerySchema>;
+export type SearchQueryInput = z.input<typeof searchQuerySchema>;
+
+const LISTS = ["type", "country", "collection", "place", "decade", "century", "confidence", "state"] as const;
+
+/** Address parameters → the object the schema checks (unknown parameters are left out). */
+export function searchParamsToQuery(params: URLSearchParams): Record<string, unknown> {
+  const values = (key: string) => params.getAll(key).flatMap((v) => v.split(",")).map((v) => v.trim()).filter(Boolean);
+  const out: Record<string, unknown> = { terms: {}, counts: {} };
+  for (const key of ["scope", "q", "from", "to", "sort", "page", "perPage"]) {
+    const value = params.get(key)?.trim();
+    if (value) out[key] = value;
+  }
+  for (const key of LISTS) out[key] = values(key);
+  const proposed = params.get("proposed");
+  out.proposed = proposed === "1" || proposed === "true";
+  for (const key of new Set(params.keys())) {
+    if (key.startsWith("t_")) (out.terms as Record<string, string[]>)[key.slice(2)] = values(key);
+    if (key.startsWith("n_")) (out.counts as Record<string, string[]>)[key.slice(2)] = values(key);
+  }
+  return out;
+}
