@@ -66,6 +66,9 @@ describe("what reaches the index, and who finds it", { timeout: 120_000 }, () =>
     await vetted(`b ${word}`, [observe("right_hand_technique", "strumming", "possible"), observe("instrument_type", "lute")]);
     await vetted(`c ${word}`, [observe("right_hand_technique", "plucking"), observe("instrument_type", "lute")]);
     await propose(await region(`d ${word}`, [observe("right_hand_technique", "plucking"), observe("instrument_type", "vihuela")]));
+    // Wait for every region in its final state: the reader who asks for proposed work sees all four
+    // only once the proposal (not the draft before it) and the three vetted versions are indexed.
+    await eventually(() => searchAs(reader, `q=${word}&proposed=1`), (a) => expect(a.total).toBe(4));
     await eventually(() => searchAs(contributor, `q=${word}`), (a) => expect(a.total).toBe(4));
     const { facetDistribution: f, total, labels } = await searchAs(reader, `q=${word}`);
     expect(total).toBe(3);
