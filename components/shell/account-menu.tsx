@@ -1,5 +1,6 @@
 "use client";
 
+import Link from "next/link";
 import { signOut } from "next-auth/react";
 import { useState } from "react";
 
@@ -14,6 +15,9 @@ export function AccountMenu({ name, email, role }: { name: string; email: string
       <div className="absolute right-0 z-20 mt-1 w-64 rounded border border-rule bg-card p-3 shadow-lg">
         <p className="text-sm text-ink-soft">Signed in as</p>
         <p className="truncate text-sm font-semibold">{email}</p>
+        <Link href="/account" className="mt-3 block rounded border border-rule px-3 py-1.5 text-center text-sm font-semibold no-underline hover:bg-paper-deep">
+          Your account
+        </Link>
         <button
           type="button"
           disabled={leaving}

@@ -11,12 +11,15 @@ export function SiteHeader({ actor, devMail }: { actor: Actor | null; devMail: b
     { href: "/places", label: "Places" },
     // The vocabulary explains the terms of the evidence to everyone; editors also change it there.
     { href: "/vocabulary", label: "Vocabulary" },
+    // A reader's own studies: signed-in people only (visitors open public dossiers by their address).
+    ...(can(actor, "dossier.manage") ? [{ href: "/dossiers", label: "Dossiers" }] : []),
+    ...(can(actor, "review.read_desk") ? [{ href: "/review", label: "Review desk" }] : []),
     ...(can(actor, "user.manage") ? [{ href: "/admin/users", label: "Users" }] : []),
     ...(can(actor, "audit.read") ? [{ href: "/admin/audit", label: "Audit trail" }] : []),
     ...(devMail ? [{ href: "/dev/mail", label: "Mailbox" }] : []),
   ];
   return (
-    <header className="border-b border-rule bg-card">
+    <header className="border-b border-rule bg-card print:hidden">
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
         <Link href="/" className="flex items-center gap-2 text-ink no-underline" aria-label="Cordarium, the archive">
           <RoseMark />

@@ -12,3 +12,4 @@ export * from "./vocabulary";
 export * from "./regions";
 export * from "./notifications";
 export * from "./search-outbox";
+export * from "./dossiers";

@@ -46,6 +46,8 @@ export const RULES = {
   "audit.read": { min: "admin" },
   "system.reindex": { min: "admin" },
   "system.backup": { min: "admin" },
+  // Sending the daily digest out of schedule mails every person who chose it.
+  "system.digest": { min: "admin" },
 } as const satisfies Record<string, Rule>;
 
 export type Action = keyof typeof RULES;

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { ROLES } from "@/db/schema/users";
+import { NOTIFY_MODES, ROLES } from "@/db/schema/users";
 
 export const roleSchema = z.enum(ROLES);
 export const emailSchema = z.string().trim().toLowerCase().email("Enter a valid e-mail address.").max(254);
@@ -29,3 +29,10 @@ export type UserUpdate = z.infer<typeof userUpdateSchema>;
 
 export const invitationSchema = z.object({ email: emailSchema, role: roleSchema });
 export type InvitationInput = z.infer<typeof invitationSchema>;
+
+/** How a person wants review e-mails; the same schema parses the account form and the API. */
+export const notificationChoiceSchema = z.object({
+  version: z.number().int().positive(),
+  notify: z.enum(NOTIFY_MODES, { error: "Choose each at once, one letter a day, or none." }),
+});
+export type NotificationChoiceInput = z.infer<typeof notificationChoiceSchema>;

@@ -43,6 +43,10 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/regions/[id]/propose": { POST: "contributor" },
   "/api/regions/[id]/withdraw": { POST: "contributor" },
   "/api/regions/[id]/review": { POST: "editor" },
+  "/api/regions/[id]/comments": { GET: "reader", POST: "contributor" },
+  "/api/review/desk": { GET: "editor" },
+  "/api/account/notifications": { GET: "reader", PATCH: "reader" },
+  "/api/admin/notifications/digest": { POST: "admin" },
   "/api/regions/[id]/annotation": { GET: "public" },
   "/api/images/[id]/annotations": { GET: "public" },
   "/api/sources/[id]/stringing": { GET: "public" },
@@ -53,6 +57,14 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/vocabulary/aspects/[id]/order": { POST: "editor" },
   "/api/vocabulary/terms/[id]": { PATCH: "editor", DELETE: "editor" },
   "/api/vocabulary/terms/[id]/merge": { POST: "editor" },
+  "/api/dossiers": { GET: "reader", POST: "reader" },
+  "/api/dossiers/[id]": { GET: "public", PATCH: "reader", DELETE: "reader" },
+  "/api/dossiers/[id]/restore": { POST: "reader" },
+  "/api/dossiers/[id]/items": { POST: "reader" },
+  "/api/dossiers/[id]/items/[itemId]": { PATCH: "reader", DELETE: "reader" },
+  "/api/dossiers/[id]/order": { POST: "reader" },
+  "/api/dossiers/[id]/shares": { PUT: "reader" },
+  "/api/dossiers/[id]/export.csv": { GET: "public" },
 };
 
 const ROLES = ["reader", "contributor", "editor", "admin"] as const;

@@ -43,6 +43,7 @@ const LOWEST: Record<Action, "anyone" | "reader" | "contributor" | "editor" | "a
   "audit.read": "admin",
   "system.reindex": "admin",
   "system.backup": "admin",
+  "system.digest": "admin",
 };
 
 const ladder = [

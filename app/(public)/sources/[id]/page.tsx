@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { AddToDossier } from "@/components/dossiers/add-to-dossier";
 import { SourceImages } from "@/components/images/source-images";
 import { SourceEvidence } from "@/components/regions/source-evidence";
 import { SourceAdminActions } from "@/components/sources/source-admin-actions";
@@ -72,6 +73,7 @@ export default async function SourcePage({ params }: Props) {
               Edit
             </Link>
           )}
+          {can(actor, "dossier.manage") && !source.deletedAt && <AddToDossier kind="source" id={source.id} />}
           {can(actor, "source.delete") && <SourceAdminActions id={source.id} version={source.version} deleted={Boolean(source.deletedAt)} />}
         </div>
       </header>
