@@ -22,11 +22,11 @@ export function DateFilter({ params }: { params: URLSearchParams }) {
       <Hidden params={params} skip={["from", "to", "page", "decade", "century"]} />
       <div className="flex items-end gap-2">
         <label className="text-sm">
-          From
+          From year
           <input name="from" defaultValue={from} inputMode="numeric" placeholder="1620" className="block w-20 rounded border border-rule bg-card px-2 py-1" />
         </label>
         <label className="text-sm">
-          To
+          To year
           <input name="to" defaultValue={to} inputMode="numeric" placeholder="1700" className="block w-20 rounded border border-rule bg-card px-2 py-1" />
         </label>
         <button type="submit" className="rounded border border-rule bg-card px-3 py-1 text-sm font-semibold hover:bg-paper-deep">Apply dates</button>

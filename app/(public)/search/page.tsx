@@ -9,6 +9,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { can } from "@/lib/auth/policy";
 import { currentActor } from "@/lib/auth/session";
 import { countryName } from "@/lib/catalogue/countries";
+import { boxAround } from "@/lib/charts/projection";
 import { worldMap } from "@/lib/charts/world-map";
 import { ValidationError } from "@/lib/errors";
 import type { RegionDocument } from "@/lib/search/documents";
@@ -73,6 +74,7 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
     .filter((a) => a.kind === "terms" && !a.deprecated)
     .map((a) => ({ key: a.key, label: a.label, terms: Object.fromEntries(a.terms.map((t) => [t.key, t.label])) }));
   const mayPropose = can(actor, "archive.read_proposed");
+  const places = searchPlaces(chartHits.hits);
 
   return (
     <>
@@ -109,8 +111,9 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
           {answer.total > 0 && (
             <SearchCharts
               histogram={searchHistogram(chartHits.hits, stack, { from: query.from, to: query.to })}
-              places={searchPlaces(chartHits.hits)}
-              map={worldMap({ width: 960, height: 500 })}
+              places={places}
+              // Zoomed to where the evidence is, so that small countries are large enough to click.
+              map={worldMap({ width: 960, height: 500, focus: boxAround(places.places) })}
               params={params}
               stack={stack}
               stackOptions={stackOptions}
