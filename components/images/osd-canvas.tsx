@@ -12,11 +12,13 @@ type Props = {
   label: string;
   /** Id of the element that explains the keyboard commands. */
   describedBy?: string;
+  /** More OpenSeadragon options (keep the object stable: a new one rebuilds the viewer). */
+  options?: OpenSeadragon.Options;
   onViewer(viewer: OpenSeadragon.Viewer | null): void;
   onOpenFailed(message: string): void;
 };
 
-export default function OsdCanvas({ infoUrl, label, describedBy, onViewer, onOpenFailed }: Props) {
+export default function OsdCanvas({ infoUrl, label, describedBy, options, onViewer, onOpenFailed }: Props) {
   const element = useRef<HTMLDivElement>(null);
   // Callbacks change identity on every parent render; the viewer must not be rebuilt for that.
   const handlers = useRef({ onViewer, onOpenFailed });
@@ -43,6 +45,7 @@ export default function OsdCanvas({ infoUrl, label, describedBy, onViewer, onOpe
       visibilityRatio: 0.5,
       keyboardNavEnabled: true,
       animationTime: 0.6,
+      ...options,
     });
     // OpenSeadragon makes its canvas focusable; name it and say how to steer it by keyboard.
     viewer.canvas.setAttribute("role", "application");
@@ -57,7 +60,7 @@ export default function OsdCanvas({ infoUrl, label, describedBy, onViewer, onOpe
       handlers.current.onViewer(null);
       viewer.destroy();
     };
-  }, [infoUrl, label, describedBy]);
+  }, [infoUrl, label, describedBy, options]);
 
   return <div ref={element} className="h-full w-full" data-testid="osd-canvas" />;
 }

@@ -12,6 +12,8 @@ export function SiteHeader({ actor, devMail }: { actor: Actor | null; devMail: b
     { href: "/places", label: "Places" },
     // The vocabulary explains the terms of the evidence to everyone; editors also change it there.
     { href: "/vocabulary", label: "Vocabulary" },
+    // Anyone may lay regions side by side; what each sees is decided by the table's query.
+    { href: "/light-table", label: "Light table" },
     // A reader's own studies: signed-in people only (visitors open public dossiers by their address).
     ...(can(actor, "dossier.manage") ? [{ href: "/dossiers", label: "Dossiers" }] : []),
     ...(can(actor, "review.read_desk") ? [{ href: "/review", label: "Review desk" }] : []),

@@ -11,5 +11,5 @@ export * from "./jobs";
 export * from "./vocabulary";
 export * from "./regions";
 export * from "./notifications";
-export * from "./search-outbox";
 export * from "./dossiers";
+export * from "./search-outbox";

@@ -2,10 +2,10 @@ import "server-only";
 import { config } from "@/lib/config";
 import { imageProcessingHandler } from "@/lib/images/process";
 import { scheduleSweep, storageSweepHandler } from "@/lib/images/sweep";
-import { searchReindexHandler } from "@/lib/search/reindex-job";
-import { startSearchDelivery } from "@/lib/search/worker";
 import { notificationSendHandler } from "@/lib/notifications/deliver";
 import { notificationDigestHandler, scheduleDigest } from "@/lib/notifications/digest";
+import { searchReindexHandler } from "@/lib/search/reindex-job";
+import { startSearchDelivery } from "@/lib/search/worker";
 import { startWorker } from "./worker";
 
 export async function startJobWorker(): Promise<void> {

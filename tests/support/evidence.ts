@@ -19,9 +19,9 @@ export async function vocabulary(jar?: Jar): Promise<Vocabulary> {
   };
 }
 
-/** A published source with one processed photograph of the given size, made by `jar`. */
-export async function photographedSource(jar: Jar, width = 1600, height = 1200): Promise<{ sourceId: number; imageId: number }> {
-  const res = await call("/api/sources", { jar, json: { title: unique("Evidence"), objectType: "painting", state: "published" } });
+/** A published source with one processed photograph of the given size, made by `jar`; `fields` add to or replace its catalogue fields. */
+export async function photographedSource(jar: Jar, width = 1600, height = 1200, fields: Record<string, unknown> = {}): Promise<{ sourceId: number; imageId: number }> {
+  const res = await call("/api/sources", { jar, json: { title: unique("Evidence"), objectType: "painting", state: "published", ...fields } });
   const sourceId = ((await res.json()) as { source: { id: number } }).source.id;
   const { imageId } = await upload(jar, sourceId, "evidence.jpg", await picture(Math.floor(Math.random() * 1e6), width, height));
   const image = await settled(jar, sourceId, imageId!);

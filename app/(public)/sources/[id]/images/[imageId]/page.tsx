@@ -5,11 +5,12 @@ import { ImageViewer } from "@/components/images/image-viewer";
 import { imageName } from "@/components/images/image-types";
 import { toSourceImage } from "@/components/images/source-images";
 import { Notice } from "@/components/ui/notice";
+import { can } from "@/lib/auth/policy";
 import { currentActor } from "@/lib/auth/session";
 import { NotFoundError } from "@/lib/errors";
 import { getImageForViewer, listImagesOfSource } from "@/lib/images/queries";
 
-type Props = { params: Promise<{ id: string; imageId: string }> };
+type Props = { params: Promise<{ id: string; imageId: string }>; searchParams: Promise<{ region?: string | string[] }> };
 
 const positive = (s: string) => (/^\d+$/.test(s) && Number(s) > 0 ? Number(s) : null);
 
@@ -25,7 +26,7 @@ async function load({ id, imageId }: { id: string; imageId: string }) {
     const all = await listImagesOfSource(actor, sourceId);
     const listed = all.find((i) => i.id === wanted);
     if (!listed) notFound();
-    return { image: listed, source: image.source, ready: all.filter((i) => i.state === "ready") };
+    return { actor, image: listed, source: image.source, ready: all.filter((i) => i.state === "ready") };
   } catch (error) {
     if (error instanceof NotFoundError) notFound();
     throw error;
@@ -37,8 +38,9 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
   return { title: image.caption ? `${source.title}: ${image.caption}` : `${source.title}: image ${image.id}` };
 }
 
-export default async function ImageViewerPage({ params }: Props) {
-  const { image, source, ready } = await load(await params);
+export default async function ImageViewerPage({ params, searchParams }: Props) {
+  const { actor, image, source, ready } = await load(await params);
+  const { region } = await searchParams;
   const shown = toSourceImage(image);
   const position = ready.findIndex((i) => i.id === image.id);
   const others = ready.map(({ id, sourceId, caption, originalFilename }) => ({ id, sourceId, caption, originalFilename }));
@@ -56,7 +58,15 @@ export default async function ImageViewerPage({ params }: Props) {
         <p className="mt-1 text-lg text-ink-soft">{imageName(image)}</p>
       </header>
       {image.state === "ready" ? (
-        <ImageViewer image={shown} sourceTitle={source.title} others={others} />
+        <ImageViewer
+          image={shown}
+          sourceTitle={source.title}
+          others={others}
+          canDraw={can(actor, "region.create")}
+          viewerId={actor?.id ?? null}
+          canSeeProposed={can(actor, "archive.read_proposed")}
+          initialRegionId={typeof region === "string" ? positive(region) : null}
+        />
       ) : (
         <Notice tone={image.state === "failed" ? "warn" : "info"}>
           {image.state === "failed"
