@@ -1,6 +1,7 @@
 // Search results as a grid of region crops or as a table; each opens the region in the image viewer.
 import Link from "next/link";
 import { iiifBase } from "@/components/images/image-types";
+import { AddToLightTable } from "@/components/light-table/add-to-light-table";
 import { regionUrl } from "@/lib/iiif/fragments";
 import type { RegionDocument } from "@/lib/search/documents";
 import { ResultKeys } from "./result-keys";
@@ -16,7 +17,7 @@ function crop(hit: RegionDocument, size: number): string | null {
 const titleOf = (hit: RegionDocument) => hit.label || hit.terms.slice(0, 3).join(", ") || `Region ${hit.regionId}`;
 const whereWhen = (hit: RegionDocument) => [hit.datingWords ?? hit.dating, hit.place, hit.country].filter(Boolean).join(" · ");
 
-export function ResultGrid({ hits }: { hits: RegionDocument[] }) {
+export function ResultGrid({ hits, proposed }: { hits: RegionDocument[]; proposed: boolean }) {
   return (
     <ResultKeys>
       <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-4" aria-label="Results (arrow keys move between them)">
@@ -34,6 +35,7 @@ export function ResultGrid({ hits }: { hits: RegionDocument[] }) {
                 <span className="block text-xs text-ink-faint">{whereWhen(hit)}</span>
                 {hit.copy === "working" && <span className="mt-1 inline-block rounded bg-paper-deep px-1 text-xs">{hit.state}, not yet vetted</span>}
               </Link>
+              <AddToLightTable regionId={hit.regionId} proposed={proposed} showOpen={false} className="px-2 pb-2" />
             </li>
           );
         })}
@@ -42,7 +44,7 @@ export function ResultGrid({ hits }: { hits: RegionDocument[] }) {
   );
 }
 
-export function ResultTable({ hits }: { hits: RegionDocument[] }) {
+export function ResultTable({ hits, proposed }: { hits: RegionDocument[]; proposed: boolean }) {
   return (
     <ResultKeys className="overflow-x-auto">
       <table className="w-full text-sm">
@@ -54,7 +56,8 @@ export function ResultTable({ hits }: { hits: RegionDocument[] }) {
             <th scope="col" className="py-1 pr-3">Date</th>
             <th scope="col" className="py-1 pr-3">Place</th>
             <th scope="col" className="py-1 pr-3">Observed</th>
-            <th scope="col" className="py-1">State</th>
+            <th scope="col" className="py-1 pr-3">State</th>
+            <th scope="col" className="py-1"><span className="sr-only">Light table</span></th>
           </tr>
         </thead>
         <tbody>
@@ -67,7 +70,10 @@ export function ResultTable({ hits }: { hits: RegionDocument[] }) {
               <td className="py-1 pr-3">{hit.datingWords ?? hit.dating ?? "undated"}</td>
               <td className="py-1 pr-3">{[hit.place, hit.country].filter(Boolean).join(", ")}</td>
               <td className="py-1 pr-3">{hit.terms.join(", ")}</td>
-              <td className="py-1">{hit.state}</td>
+              <td className="py-1 pr-3">{hit.state}</td>
+              <td className="py-1">
+                <AddToLightTable regionId={hit.regionId} proposed={proposed} showOpen={false} />
+              </td>
             </tr>
           ))}
         </tbody>

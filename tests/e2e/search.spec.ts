@@ -99,12 +99,20 @@ test("a reader searches, narrows by facets, dates and the map, and never sees un
   await page.keyboard.press("ArrowLeft");
   await expect(search.results.nth(0).getByRole("link")).toBeFocused();
 
+  // A decade's bar narrows the dates to that decade; back again, a country on the map narrows the place.
+  await page.getByRole("link", { name: /^1620s: / }).click();
+  await expect(page).toHaveURL(/from=1620&to=1629/);
+  await search.expectRegions([sevilleA]);
+  await page.goBack();
+  await search.expectRegions([sevilleA, naples]);
+
   await search.clickCountry("Italy");
   await expect(page).toHaveURL(/country=IT/);
   await search.expectRegions([naples]);
   // The other filters stay as they were.
   await expect(page).toHaveURL(/t_right_hand_technique=strumming/);
   await expect(page).toHaveURL(/from=1620/);
+  await expect(page.getByRole("link", { name: "Open these on the light table" })).toHaveAttribute("href", `/light-table?r=${naples}`);
 
   // Arrow keys and Enter: the result opens in the viewer at its region.
   await search.results.first().getByRole("link").focus();

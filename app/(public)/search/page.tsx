@@ -4,11 +4,13 @@ import { FacetPanel } from "@/components/search/facet-panel";
 import { SearchBox } from "@/components/search/search-box";
 import { SearchCharts } from "@/components/search/search-charts";
 import { ResultGrid, ResultTable } from "@/components/search/search-results";
+import { OpenLightTableLink } from "@/components/light-table/add-to-light-table";
 import { EmptyState } from "@/components/ui/empty-state";
 import { PageTitle } from "@/components/ui/page-title";
 import { can } from "@/lib/auth/policy";
 import { currentActor } from "@/lib/auth/session";
 import { countryName } from "@/lib/catalogue/countries";
+import { lightTableHref, MAX_REGIONS } from "@/lib/light-table/links";
 import { boxAround } from "@/lib/charts/projection";
 import { worldMap } from "@/lib/charts/world-map";
 import { ValidationError } from "@/lib/errors";
@@ -102,9 +104,17 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
             {hits.length === 0 ? (
               <EmptyState title="Nothing matches this search">Remove a filter or try other words.</EmptyState>
             ) : view === "table" ? (
-              <ResultTable hits={hits} />
+              <ResultTable hits={hits} proposed={query.proposed} />
             ) : (
-              <ResultGrid hits={hits} />
+              <ResultGrid hits={hits} proposed={query.proposed} />
+            )}
+            {hits.length > 0 && (
+              <p className="flex flex-wrap gap-4 text-sm">
+                <Link href={lightTableHref(hits.map((h) => h.regionId).slice(0, MAX_REGIONS), { proposed: query.proposed })} className="font-semibold">
+                  Open these on the light table
+                </Link>
+                <OpenLightTableLink proposed={query.proposed} label="Open the regions you gathered" />
+              </p>
             )}
             <Pager params={params} page={answer.page} totalPages={answer.totalPages} />
           </section>
