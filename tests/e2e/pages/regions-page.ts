@@ -70,9 +70,18 @@ export class RegionsPage {
     await this.page.mouse.up();
   }
 
-  /** One click (Playwright sends each with a click count of one: two in a row are not a double-click). */
+  /**
+   * One click as a person makes it: the pointer arrives, the page draws what hovering there shows (on
+   * the first corner of a polygon, the handle that closes it), then the button goes down and up. The
+   * drawing layer ignores a click whose press and release land on different elements, which a press at
+   * the very moment of arrival can do. Playwright sends each click with a click count of one: two in a
+   * row are not a double-click.
+   */
   async clickAt([x, y]: Point) {
-    await this.page.mouse.click(x, y);
+    await this.page.mouse.move(x, y);
+    await this.page.evaluate(() => new Promise<void>((done) => requestAnimationFrame(() => requestAnimationFrame(() => done()))));
+    await this.page.mouse.down();
+    await this.page.mouse.up();
   }
 
   /** The shape a list item describes: "rectangle at 120, 340, 200 × 150 px" or "polygon of 4 points within …". */
