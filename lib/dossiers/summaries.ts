@@ -1,4 +1,5 @@
 import "server-only";
+import { sourceCaptionColumns } from "@/lib/sources/queries";
 import { and, asc, eq, inArray, isNull } from "drizzle-orm";
 import type { Executor } from "@/db/client";
 import { collections, images, places, sources } from "@/db/schema";
@@ -16,12 +17,7 @@ export async function sourceSummaries(tx: Executor, actor: Actor | null, ids: nu
   if (ids.length === 0) return new Map();
   const rows = await tx
     .select({
-      id: sources.id,
-      title: sources.title,
-      objectType: sources.objectType,
-      artist: sources.artist,
-      attributionQualifier: sources.attributionQualifier,
-      datingEdtf: sources.datingEdtf,
+      ...sourceCaptionColumns,
       medium: sources.medium,
       placeName: places.name,
       placeSubdivision: places.subdivisionCode,

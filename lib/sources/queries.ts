@@ -13,6 +13,16 @@ import { afterCursor, decodeCursor, encodeCursor } from "./keyset";
 import type { SourceListQuery } from "./schemas";
 import { canSeeSource, visibleSources } from "./visibility";
 
+/** What every list and caption of sources names first: title, kind, attribution and date. */
+export const sourceCaptionColumns = {
+  id: sources.id,
+  title: sources.title,
+  objectType: sources.objectType,
+  artist: sources.artist,
+  attributionQualifier: sources.attributionQualifier,
+  datingEdtf: sources.datingEdtf,
+};
+
 
 const SORT_COLUMNS = { title: sources.title, dating: sources.datingSearchEarliest, created: sources.createdAt } as const;
 
@@ -56,12 +66,7 @@ export async function listSources(actor: Actor | null, q: SourceListQuery) {
   const [rows, [{ total }]] = await Promise.all([
     db()
       .select({
-        id: sources.id,
-        title: sources.title,
-        objectType: sources.objectType,
-        artist: sources.artist,
-        attributionQualifier: sources.attributionQualifier,
-        datingEdtf: sources.datingEdtf,
+        ...sourceCaptionColumns,
         datingEarliest: sources.datingEarliest,
         datingLatest: sources.datingLatest,
         datingSearchEarliest: sources.datingSearchEarliest,
