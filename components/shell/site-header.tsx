@@ -6,6 +6,7 @@ import { NavLink } from "./nav-link";
 export function SiteHeader({ actor, devMail }: { actor: Actor | null; devMail: boolean }) {
   const links = [
     { href: "/", label: "Archive" },
+    { href: "/search", label: "Search" },
     { href: "/sources", label: "Sources" },
     { href: "/collections", label: "Collections" },
     { href: "/places", label: "Places" },

@@ -83,3 +83,38 @@ export async function searchArchive(actor: Actor | null, q: SearchQuery): Promis
     totalPages: answer.totalPages ?? 0,
   };
 }
+
+/** What the charts need of one hit: its widened dating, its place and the values of one aspect. */
+export type ChartHit = {
+  regionId: number;
+  dateFrom?: number;
+  dateTo?: number;
+  dated: boolean;
+  placeId: number | null;
+  place: string | null;
+  country: string | null;
+  _geo?: { lat: number; lng: number };
+  [facet: `t_${string}`]: string[] | undefined;
+};
+
+/**
+ * Up to `limit` hits of the same search (same visibility filter), with only the fields the decade chart
+ * and the place map read, so that charts summarise the whole result rather than one page of it.
+ */
+export async function searchChartHits(actor: Actor | null, q: SearchQuery, options: { limit?: number; stackAspect?: string | null } = {}): Promise<{ hits: ChartHit[]; total: number }> {
+  authorize(actor, "archive.read");
+  if (q.proposed) authorize(actor, "archive.read_proposed");
+  const visibility = q.scope === "regions" ? regionVisibilityFilter(actor, { proposed: q.proposed }) : sourceVisibilityFilter(actor);
+  const fields = ["regionId", "dateFrom", "dateTo", "dated", "placeId", "place", "country", "_geo"];
+  if (options.stackAspect && /^[a-z0-9_]{1,60}$/.test(options.stackAspect)) fields.push(`t_${options.stackAspect}`);
+  try {
+    const answer = await search()
+      .index(liveIndex(q.scope))
+      .search(q.q || null, { filter: [...visibility, ...requestFilters(q)], limit: options.limit ?? 5_000, offset: 0, attributesToRetrieve: fields });
+    return { hits: answer.hits as unknown as ChartHit[], total: answer.estimatedTotalHits ?? answer.hits.length };
+  } catch (error) {
+    const missing = error instanceof MeilisearchApiError && error.cause?.code === "index_not_found";
+    if (missing || error instanceof MeilisearchRequestError || error instanceof MeilisearchRequestTimeOutError) throw new SearchUnavailableError();
+    throw error;
+  }
+}

@@ -1,7 +1,8 @@
 // `npm run bench`: times listSources (lib/sources/queries.ts) over 100,000 invented sources in a MariaDB
 // of its own, records the query plans, and writes tests/bench/results/sources-list.{json,md}; then the
 // image pipeline against vips dzsave (tests/bench/images/, results in images.{json,md}).
-// `npm run bench -- sources` or `npm run bench -- images` runs one part only.
+// `npm run bench -- sources` or `npm run bench -- images` runs one part only; `npm run bench -- search`
+// (against a running test stack, tests/bench/search/) runs only when named.
 // A measurement, not a test: nothing here fails on timing.
 import { register } from "node:module";
 import os from "node:os";
@@ -29,6 +30,9 @@ const serverOnlyHook = `export async function resolve(specifier, context, next) 
   return next(specifier, context);
 }`;
 register(`data:text/javascript,${encodeURIComponent(serverOnlyHook)}`);
+
+// The search part talks to a running stack: it reads the shell's settings before they are replaced below.
+const shellEnv = { ...process.env };
 
 // The app's configuration, pointed at the bench database whatever the shell says; the other services
 // are never contacted by the list query, but lib/config.ts requires their settings.
@@ -236,18 +240,20 @@ export type Report = {
   runMs: number;
 };
 
-const PARTS = ["sources", "images"] as const;
+const PARTS = ["sources", "images", "search"] as const;
 const asked = process.argv.slice(2);
 const unknown = asked.filter((a) => !(PARTS as readonly string[]).includes(a));
 if (unknown.length) {
-  console.error(`bench: unknown part ${unknown.join(", ")}; use ${PARTS.join(" or ")} (or nothing, for both)`);
+  console.error(`bench: unknown part ${unknown.join(", ")}; use ${PARTS.join(", ")} (or nothing, for sources and images)`);
   process.exit(2);
 }
-const wanted = (part: (typeof PARTS)[number]) => asked.length === 0 || asked.includes(part);
+// Search needs a running stack, so it runs only when named.
+const wanted = (part: (typeof PARTS)[number]) => (asked.length === 0 && part !== "search") || asked.includes(part);
 
 async function parts() {
   if (wanted("sources")) await main();
   if (wanted("images") && !process.exitCode) await (await import("./images/run")).runImagesBench();
+  if (wanted("search") && !process.exitCode) await (await import("./search/run")).runSearchBench(shellEnv);
 }
 
 parts().catch((error: unknown) => {

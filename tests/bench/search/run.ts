@@ -1,0 +1,158 @@
+// The search part of `npm run bench` (`npm run bench -- search`, only when asked): indexes 100,000
+// invented region documents into a running test stack's search service (start one with
+// docker-free-scripts: use_profile test; start_services; …; start_app — or bash /work/helpers/stack.sh),
+// hits GET /api/search on loopback with autocannon for a few query shapes, and sets each answer's
+// latency beside the search service's own processingTimeMs for the same query (the ratio is what the
+// app adds: session, parsing, the visibility filter, labels, JSON). Then times the decade chart and the
+// place summary over 100,000 results. The bench documents are deleted at the end. Writes
+// tests/bench/results/search.{json,md}. A measurement, not a test: nothing here fails on timing.
+import { writeFileSync } from "node:fs";
+import os from "node:os";
+import autocannon from "autocannon";
+import { requestFilters } from "../../../lib/search/filters";
+import { searchHistogram, searchPlaces } from "../../../lib/search/page/charts";
+import type { ChartHit } from "../../../lib/search/query";
+import { searchParamsToQuery, searchQuerySchema } from "../../../lib/search/schemas";
+import { regionVisibilityFilter } from "../../../lib/search/visibility";
+import { stats, type Stats } from "../measure";
+import { BENCH_FIRST_ID, benchDocuments } from "./generate";
+
+const COUNT = Number(process.env.BENCH_SEARCH_DOCS ?? 100_000);
+// A fixed number of requests per shape, not a duration: at 100,000 documents the fake takes seconds per answer.
+const REQUESTS = Number(process.env.BENCH_SEARCH_REQUESTS ?? 24);
+const CONNECTIONS = 4;
+const DIRECT_REPS = Number(process.env.BENCH_SEARCH_DIRECT_REPS ?? 8);
+const SORTS: Record<string, string[]> = { relevance: [], date: ["dateFrom:asc"], date_desc: ["dateTo:desc"], recent: ["updatedAt:desc"] };
+
+const SHAPES = [
+  { id: "browse", label: "No words, no filter (facet counts over everything)", query: "" },
+  { id: "words", label: "Words", query: "q=serenade" },
+  { id: "facets-dates", label: "Technique + instrument + dates 1620–1700", query: "t_right_hand_technique=strumming&t_instrument_type=five_course_guitar&from=1620&to=1700" },
+  { id: "country-sorted-page", label: "Country, sorted by date, page 3", query: "country=IT&sort=date&page=3" },
+];
+
+const NOTE =
+  "Read with care: the search service here is the JavaScript fake (fakes/search), one thread; at 100,000 documents it answers in seconds, concurrent requests queue behind one another, and the app's search client gives up after 5 s (lib/search/client.ts) and answers 503. Where most answers are 503 the app's times are that timeout, not its overhead, and the ratio says nothing; a real Meilisearch answers these shapes far faster. Compare runs on the same machine only.";
+
+type Env = Record<string, string | undefined>;
+type ShapeResult = { id: string; label: string; query: string; total: number; app: Stats & { requestsPerSecond: number; errors: number; statuses: Record<string, number> }; serviceProcessingMs: Stats; serviceRoundTripMs: Stats; ratioP50: number | null };
+
+async function meili(env: Env, path: string, init: { method?: string; body?: unknown } = {}) {
+  const res = await fetch(`${env.MEILI_HOST}${path}`, {
+    method: init.method ?? (init.body === undefined ? "GET" : "POST"),
+    headers: { authorization: `Bearer ${env.MEILI_API_KEY}`, "content-type": "application/json" },
+    body: init.body === undefined ? undefined : JSON.stringify(init.body),
+  });
+  if (!res.ok) throw new Error(`${path}: ${res.status} ${await res.text()}`);
+  return res.json() as Promise<Record<string, unknown>>;
+}
+
+async function waitTask(env: Env, task: { taskUid?: number }) {
+  for (;;) {
+    const t = await meili(env, `/tasks/${task.taskUid}`);
+    if (t.status === "succeeded") return;
+    if (t.status === "failed" || t.status === "canceled") throw new Error(`task ${task.taskUid} ${t.status}: ${JSON.stringify(t.error)}`);
+    await new Promise((r) => setTimeout(r, 200));
+  }
+}
+
+async function underLoad(url: string): Promise<ShapeResult["app"]> {
+  const samples: number[] = [];
+  const statuses: Record<string, number> = {};
+  const instance = autocannon({ url, connections: CONNECTIONS, amount: REQUESTS, timeout: 300 });
+  // Every answer's time counts, refusals too (a 503 after the client's 5 s timeout is what a reader waits).
+  instance.on("response", (_client: unknown, status: number, _bytes: number, ms: number) => {
+    samples.push(ms);
+    statuses[status] = (statuses[status] ?? 0) + 1;
+  });
+  const result = await instance;
+  return { ...stats(samples.length ? samples : [Number.NaN]), requestsPerSecond: Math.round(result.requests.average * 10) / 10, errors: result.errors, statuses };
+}
+
+export async function runSearchBench(env: Env) {
+  const app = env.TEST_APP_URL;
+  if (!app || !env.MEILI_HOST || !env.MEILI_API_KEY) {
+    console.error("bench search: needs a running test stack: TEST_APP_URL, MEILI_HOST and MEILI_API_KEY (source docker-free-scripts/lib.sh; use_profile test).");
+    process.exitCode = 2;
+    return;
+  }
+  const uid = `${env.SEARCH_INDEX_PREFIX ?? "cordarium_"}regions`;
+  const started = performance.now();
+  console.log(`search bench: generating ${COUNT} documents`);
+  const docs = benchDocuments(COUNT);
+  const indexStart = performance.now();
+  for (let i = 0; i < docs.length; i += 10_000) {
+    await waitTask(env, (await meili(env, `/indexes/${uid}/documents`, { body: docs.slice(i, i + 10_000) })) as { taskUid: number });
+    console.log(`  indexed ${Math.min(i + 10_000, docs.length)}`);
+  }
+  const indexMs = Math.round(performance.now() - indexStart);
+  const shapes: ShapeResult[] = [];
+  try {
+    for (const shape of SHAPES) {
+      const q = searchQuerySchema.parse(searchParamsToQuery(new URLSearchParams(shape.query)));
+      // The same search the app sends for a visitor (lib/search/query.ts).
+      const body = { q: q.q || null, filter: [...regionVisibilityFilter(null, { proposed: false }), ...requestFilters(q)], facets: ["*"], sort: SORTS[q.sort], page: q.page, hitsPerPage: q.perPage };
+      const processing: number[] = [];
+      const roundTrip: number[] = [];
+      let total = 0;
+      for (let i = 0; i < DIRECT_REPS; i++) {
+        const t0 = performance.now();
+        const answer = await meili(env, `/indexes/${uid}/search`, { body });
+        roundTrip.push(performance.now() - t0);
+        processing.push(Number(answer.processingTimeMs));
+        total = Number(answer.totalHits ?? 0);
+      }
+      const load = await underLoad(`${app}/api/search${shape.query ? `?${shape.query}` : ""}`);
+      const service = stats(processing);
+      shapes.push({ ...shape, total, app: load, serviceProcessingMs: service, serviceRoundTripMs: stats(roundTrip), ratioP50: service.p50 > 0 ? Math.round((load.p50 / service.p50) * 10) / 10 : null });
+      console.log(`  ${shape.id}: app p50 ${load.p50} ms p95 ${load.p95} ms; service ${service.p50} ms`);
+    }
+  } finally {
+    await waitTask(env, (await meili(env, `/indexes/${uid}/documents/delete`, { body: { filter: `regionId >= ${BENCH_FIRST_ID}` } })) as { taskUid: number });
+  }
+  // The charts over every generated hit, as the page computes them over its (at most 5,000) hits.
+  const hits = docs.map((d) => d as unknown as ChartHit);
+  const histogramMs: number[] = [];
+  const placesMs: number[] = [];
+  for (let i = 0; i < 7; i++) {
+    let t0 = performance.now();
+    searchHistogram(hits, "right_hand_technique");
+    histogramMs.push(performance.now() - t0);
+    t0 = performance.now();
+    searchPlaces(hits);
+    placesMs.push(performance.now() - t0);
+  }
+  const result = {
+    when: new Date().toISOString(),
+    machine: { cpus: os.cpus().length, cpu: os.cpus()[0]?.model, node: process.version },
+    documents: docs.length,
+    indexMs,
+    load: { connections: CONNECTIONS, requests: REQUESTS, caller: "visitor (no session)" },
+    shapes,
+    charts: { hits: hits.length, decadeHistogramMs: stats(histogramMs.slice(2)), placeSummaryMs: stats(placesMs.slice(2)) },
+    runMs: Math.round(performance.now() - started),
+  };
+  writeFileSync("tests/bench/results/search.json", `${JSON.stringify(result, null, 2)}\n`);
+  writeFileSync("tests/bench/results/search.md", report(result));
+  console.log("wrote tests/bench/results/search.{json,md}");
+}
+
+function report(r: { when: string; machine: { cpus: number; cpu?: string; node: string }; documents: number; indexMs: number; shapes: ShapeResult[]; charts: { hits: number; decadeHistogramMs: Stats; placeSummaryMs: Stats } }): string {
+  const rows = r.shapes.map((s) => `| ${s.label} | ${s.total} | ${s.app.p50} | ${s.app.p95} | ${s.app.requestsPerSecond} | ${Object.entries(s.app.statuses).map(([k, v]) => `${v}× ${k}`).join(", ")} | ${s.serviceProcessingMs.p50} | ${s.serviceRoundTripMs.p50} | ${s.ratioP50 ?? "–"} |`);
+  return [
+    "# Search bench",
+    "",
+    `${r.when}, ${r.machine.cpus} CPUs (${r.machine.cpu ?? "?"}), Node ${r.machine.node}. ${r.documents} region documents indexed into the search fake in ${r.indexMs} ms.`,
+    `GET /api/search as a visitor, ${REQUESTS} requests over ${CONNECTIONS} connections per shape (autocannon, loopback). "Service" is the search service answering the same`,
+    "search directly: its own processingTimeMs and the round trip from this process. Ratio = app p50 / service processingTimeMs p50.",
+    "",
+    NOTE,
+    "",
+    "| Query | Hits | App p50 ms | App p95 ms | Req/s | Answers | Service processingTimeMs p50 | Service round trip p50 ms | Ratio |",
+    "|---|---:|---:|---:|---:|---|---:|---:|---:|",
+    ...rows,
+    "",
+    `Charts over ${r.charts.hits} hits (in process): decade histogram stacked by right-hand technique p50 ${r.charts.decadeHistogramMs.p50} ms (p95 ${r.charts.decadeHistogramMs.p95}); place summary p50 ${r.charts.placeSummaryMs.p50} ms. The search page charts at most 5,000 hits.`,
+    "",
+  ].join("\n");
+}
