@@ -52,6 +52,10 @@ export default function OsdCanvas({ infoUrl, label, describedBy, options, onView
     viewer.canvas.setAttribute("aria-roledescription", "zoomable photograph");
     viewer.canvas.setAttribute("aria-label", label);
     if (describedBy) viewer.canvas.setAttribute("aria-describedby", describedBy);
+    // OpenSeadragon focuses its canvas on every click; a plain focus() scrolls a canvas that sticks out
+    // of the window into view, which moves the page under the pointer halfway through a polygon.
+    const focusCanvas = viewer.canvas.focus.bind(viewer.canvas);
+    viewer.canvas.focus = (opts?: FocusOptions) => focusCanvas({ ...opts, preventScroll: true });
     // The frame clips outside outlines: draw the keyboard focus ring inside the canvas.
     viewer.canvas.style.outlineOffset = "-4px";
     viewer.addHandler("open", () => handlers.current.onViewer(viewer));

@@ -120,9 +120,13 @@ test("clicks with the Polygon tool add corners, and a click on the first point c
     [800, 1300],
     [350, 1350],
   ];
+  const scrolled = () => page.evaluate(() => window.scrollY);
+  const scrollBefore = await scrolled();
   for (const c of corners) await regions.clickAt(await regions.toScreen(c));
   await regions.clickAt(await regions.toScreen(corners[0]));
   await expect(regions.items).toHaveCount(before + 1);
+  // The viewer takes the keyboard focus on a click without scrolling the page under the pointer.
+  expect(await scrolled()).toBe(scrollBefore);
   const polygon = await regions.listedShape(regions.selectedItem);
   expect(polygon.kind).toBe("polygon");
   expect(polygon.points).toBe(4);
