@@ -3,7 +3,7 @@
 // and the server page redraws results, facets and charts) and the number of matches is fetched at once.
 import { useQuery } from "@tanstack/react-query";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
-import { useEffect, useState, useTransition } from "react";
+import { useEffect, useRef, useState, useTransition } from "react";
 import { api } from "@/lib/client/api";
 
 const DELAY_MS = 250;
@@ -27,8 +27,20 @@ export function SearchBox({ initial }: { initial: string }) {
   next.delete("page");
   const qs = next.toString();
 
+  // The words this box put into the address itself; any other value arrived by a link, the back
+  // button or the header's search link, and the box then shows that instead of what was typed.
+  const asked = useRef<string[]>([initial]);
+  const urlWords = params.get("q") ?? "";
   useEffect(() => {
-    if ((params.get("q") ?? "") === debounced) return;
+    if (asked.current.includes(urlWords)) return;
+    asked.current = [urlWords];
+    setText(urlWords);
+    setDebounced(urlWords);
+  }, [urlWords]);
+
+  useEffect(() => {
+    if (urlWords === debounced) return;
+    asked.current = [...asked.current.slice(-4), debounced];
     startTransition(() => router.replace(qs ? `${pathname}?${qs}` : pathname, { scroll: false }));
     // Only a change of the words starts a new search; the rest of the address is read as it is.
     // eslint-disable-next-line react-hooks/exhaustive-deps
