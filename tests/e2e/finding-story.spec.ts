@@ -140,7 +140,7 @@ test("a new scholar finds, narrows, compares, keeps and exports the evidence; th
   expect(rows.map((row) => Number(row.region_id))).toEqual(spain);
   for (const row of rows) {
     expect(row.collection).toMatch(/^Casa de los Tañedores/);
-    expect(row.accession_number).toMatch(/^CT-[13]$/);
+    expect(row.accession_number).toMatch(/^CT-[123]$/);
     expect(row.permalink).toMatch(new RegExp(`/sources/\\d+/images/\\d+\\?region=${row.region_id}$`));
     expect(row.citation).toContain(`accessed ${TODAY}`);
   }
@@ -163,7 +163,7 @@ test("a new scholar finds, narrows, compares, keeps and exports the evidence; th
   expect(health.checks.search.status).not.toBe("ok");
   expect(health.searchBacklog?.pending).toBeGreaterThan(0);
   await page.goto(`/search?q=${WORD}`);
-  await expect(page.getByRole("alert")).toContainText("Search is not available at the moment");
+  await expect(page.getByRole("alert").filter({ hasText: "Search is not available at the moment" })).toBeVisible();
 
   // …and once it is back, the vetted region reaches the scholar's search with nothing lost.
   service("start", "search");
