@@ -26,7 +26,8 @@ const bna = (km: number, id = 7): NearOrigin => ({
   place: { id, kind: "area", name: "Nashville", countryCode: "US", country: "United States of America", subdivisionCode: null, latitude: 36.12, longitude: -86.67 },
   km,
 });
-const at = (lat: number, lng: number) => ({ sourceState: "published", _geo: { lat, lng } });
+type Doc = { sourceState: string; _geo?: { lat: number; lng: number } };
+const at = (lat: number, lng: number): Doc => ({ sourceState: "published", _geo: { lat, lng } });
 
 describe("reading near and km", () => {
   it("takes a place id and a distance in whole kilometres, 100 km when only the place is given", () => {
@@ -83,7 +84,7 @@ describe("the filter and sort sent to the search service", () => {
 
 describe("the distance beside each hit", () => {
   it("matches Rosetta Code's haversine example and one degree of latitude", () => {
-    const [lax, north, here, nowhere] = withDistances([at(33.94, -118.4), at(37.12, -86.67), at(36.12, -86.67), { sourceState: "draft" }], bna(2000));
+    const [lax, north, here, nowhere] = withDistances<Doc>([at(33.94, -118.4), at(37.12, -86.67), at(36.12, -86.67), { sourceState: "draft" }], bna(2000));
     expect(lax.distanceKm).toBeCloseTo(2886.4444, 3);
     expect(north.distanceKm).toBeCloseTo(111.1949, 3);
     expect(here.distanceKm).toBe(0);
