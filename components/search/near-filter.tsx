@@ -45,20 +45,16 @@ export function NearFilter({ place, km }: { place: PlaceChoice | null; km: numbe
         errors={error ? [error] : undefined}
       />
       <div className="flex items-end gap-2">
-        <label className="text-sm">
-          Within
-          <select
-            value={distance}
-            onChange={(e) => setDistance(e.target.value)}
-            className="block rounded border border-rule bg-card px-2 py-1"
-          >
+        <div className="text-sm">
+          <label htmlFor={`${id}-km`}>Within</label>
+          <select id={`${id}-km`} value={distance} onChange={(e) => setDistance(e.target.value)} className="block rounded border border-rule bg-card px-2 py-1">
             {choices.map((n) => (
               <option key={n} value={n}>
                 {n} km
               </option>
             ))}
           </select>
-        </label>
+        </div>
         <button type="submit" className="rounded border border-rule bg-card px-3 py-1 text-sm font-semibold hover:bg-paper-deep" aria-busy={pending}>
           Apply distance
         </button>
