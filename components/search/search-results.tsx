@@ -4,6 +4,7 @@ import { iiifBase } from "@/components/images/image-types";
 import { AddToLightTable } from "@/components/light-table/add-to-light-table";
 import { regionUrl } from "@/lib/iiif/fragments";
 import type { RegionDocument } from "@/lib/search/documents";
+import { formatKm } from "@/lib/search/near";
 import { ResultKeys } from "./result-keys";
 
 export const viewerHref = (hit: RegionDocument) => `/sources/${hit.sourceId}/images/${hit.imageId}?region=${hit.regionId}`;
@@ -44,7 +45,8 @@ export function ResultGrid({ hits, proposed }: { hits: RegionDocument[]; propose
   );
 }
 
-export function ResultTable({ hits, proposed }: { hits: RegionDocument[]; proposed: boolean }) {
+/** With `showDistance` (a search near a place), a column gives each hit's distance from that place. */
+export function ResultTable({ hits, proposed, showDistance = false }: { hits: (RegionDocument & { distanceKm?: number | null })[]; proposed: boolean; showDistance?: boolean }) {
   return (
     <ResultKeys className="overflow-x-auto">
       <table className="w-full text-sm">
@@ -55,6 +57,7 @@ export function ResultTable({ hits, proposed }: { hits: RegionDocument[]; propos
             <th scope="col" className="py-1 pr-3">Source</th>
             <th scope="col" className="py-1 pr-3">Date</th>
             <th scope="col" className="py-1 pr-3">Place</th>
+            {showDistance && <th scope="col" className="py-1 pr-3 text-right">Distance</th>}
             <th scope="col" className="py-1 pr-3">Observed</th>
             <th scope="col" className="py-1 pr-3">State</th>
             <th scope="col" className="py-1"><span className="sr-only">Light table</span></th>
@@ -69,6 +72,11 @@ export function ResultTable({ hits, proposed }: { hits: RegionDocument[]; propos
               <td className="py-1 pr-3">{hit.sourceTitle}</td>
               <td className="py-1 pr-3">{hit.datingWords ?? hit.dating ?? "undated"}</td>
               <td className="py-1 pr-3">{[hit.place, hit.country].filter(Boolean).join(", ")}</td>
+              {showDistance && (
+                <td className="py-1 pr-3 text-right tabular-nums" data-testid="result-distance">
+                  {hit.distanceKm === null || hit.distanceKm === undefined ? "—" : formatKm(hit.distanceKm)}
+                </td>
+              )}
               <td className="py-1 pr-3">{hit.terms.join(", ")}</td>
               <td className="py-1 pr-3">{hit.state}</td>
               <td className="py-1">

@@ -3,13 +3,17 @@
 import { overlapQueryDays } from "@/lib/dating";
 import { ValidationError } from "@/lib/errors";
 import { dayNumber } from "./documents";
+import { geoRadiusFilter, type NearOrigin } from "./near";
 import type { SearchQuery } from "./schemas";
 
 const quoted = (v: string | number) => (typeof v === "number" ? String(v) : `"${v}"`);
 const anyOf = (field: string, values: (string | number)[]) => (values.length ? [`${field} IN [${values.map(quoted).join(", ")}]`] : []);
 
-/** The filters a search asks for, ANDed after the visibility filter. */
-export function requestFilters(q: SearchQuery): string[] {
+/**
+ * The filters a search asks for, ANDed after the visibility filter. `near` is the place the query names
+ * by `near`, with its coordinates as the server read them from the gazetteer.
+ */
+export function requestFilters(q: SearchQuery, near: NearOrigin | null = null): string[] {
   const out = [
     ...anyOf("objectType", q.type),
     ...anyOf("country", q.country),
@@ -22,6 +26,11 @@ export function requestFilters(q: SearchQuery): string[] {
     for (const [aspect, terms] of Object.entries(q.terms)) out.push(...anyOf(`t_${aspect}`, terms));
     for (const [aspect, counts] of Object.entries(q.counts)) out.push(...anyOf(`n_${aspect}`, counts));
     out.push(...anyOf("confidence", q.confidence), ...anyOf("state", q.state));
+  }
+  if (q.near !== undefined) {
+    // Never dropped quietly: a search for "near X" without X's coordinates would answer everything.
+    if (!near || near.place.id !== q.near) throw new Error(`the coordinates of place ${q.near} were not read before filtering`);
+    out.push(geoRadiusFilter(near));
   }
   if (q.from || q.to) {
     let days: { fromDay: string | null; toDay: string | null };

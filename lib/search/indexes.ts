@@ -9,7 +9,8 @@ export const INDEX_KINDS: IndexKind[] = ["regions", "sources"];
 export const TASK_WAIT = { timeout: 30_000, interval: 100 };
 
 const shared = {
-  sortableAttributes: ["dateFrom", "dateTo", "updatedAt", "sourceTitle", "title"],
+  // `_geo` makes `_geoPoint(lat, lng):asc` (nearest first) possible.
+  sortableAttributes: ["dateFrom", "dateTo", "updatedAt", "sourceTitle", "title", "_geo"],
   faceting: { maxValuesPerFacet: 200, sortFacetValuesBy: { "*": "count" as const } },
   pagination: { maxTotalHits: 10_000 },
 };

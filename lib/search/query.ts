@@ -4,25 +4,33 @@ import { MeilisearchApiError, MeilisearchRequestError, MeilisearchRequestTimeOut
 import { db } from "@/db/client";
 import { collections, places } from "@/db/schema";
 import { authorize, type Actor } from "@/lib/auth/policy";
-import { AppError } from "@/lib/errors";
+import { AppError, ValidationError } from "@/lib/errors";
+import { getPlace } from "@/lib/places/queries";
 import { search } from "./client";
 import type { RegionDocument, SourceDocument } from "./documents";
 import { requestFilters } from "./filters";
 import { liveIndex } from "./indexes";
+import { geoSort, nearKm, withDistances, type NearOrigin } from "./near";
 import type { SearchQuery, SearchSort } from "./schemas";
 import { regionVisibilityFilter, sourceVisibilityFilter } from "./visibility";
 
 export type FacetCounts = Record<string, Record<string, number>>;
 export type SearchAnswer<H> = {
+  /** With `near`, each hit carries `distanceKm` from the place (null when its source has no place). */
   hits: H[];
   facetDistribution: FacetCounts;
   /** Names of the collections and places that facets and filters name by id. */
   labels: { collectionId: Record<string, string>; placeId: Record<string, string> };
+  /** The place and distance of the `near` filter, as the gazetteer holds the place; null without one. */
+  near: NearOrigin | null;
   total: number;
   page: number;
   perPage: number;
   totalPages: number;
 };
+
+/** A region or source document; with `near`, its distance from the place in km (null: no place). */
+export type SearchHit = (RegionDocument | SourceDocument) & { distanceKm?: number | null };
 
 export class SearchUnavailableError extends AppError {
   constructor() {
@@ -36,7 +44,19 @@ const REGION_FACETS = new Set([...SHARED_FACETS, "confidence", "state", "aspects
 const isPublicFacet = (scope: SearchQuery["scope"], name: string) =>
   scope === "regions" ? REGION_FACETS.has(name) || /^[tn]_[a-z0-9_]+$/.test(name) : SHARED_FACETS.includes(name);
 
-const SORTS: Record<SearchSort, string[]> = { relevance: [], date: ["dateFrom:asc"], date_desc: ["dateTo:desc"], recent: ["updatedAt:desc"] };
+const SORTS: Record<Exclude<SearchSort, "distance">, string[]> = { relevance: [], date: ["dateFrom:asc"], date_desc: ["dateTo:desc"], recent: ["updatedAt:desc"] };
+const sortFor = (sort: SearchSort, near: NearOrigin | null) => (sort === "distance" ? (near ? [geoSort(near)] : []) : SORTS[sort]);
+
+/** The place `near` names, read from the gazetteer: its coordinates are ours, not the caller's. */
+export async function resolveNear(q: Pick<SearchQuery, "near" | "km">): Promise<NearOrigin | null> {
+  if (q.near === undefined) return null;
+  const place = await getPlace(q.near);
+  if (!place) {
+    throw new ValidationError(`No place with id ${q.near} in the gazetteer: choose the place from the list.`, { near: ["No such place in the gazetteer."] });
+  }
+  const { id, kind, name, countryCode, country, subdivisionCode, latitude, longitude } = place;
+  return { place: { id, kind, name, countryCode, country, subdivisionCode, latitude, longitude }, km: nearKm(q) };
+}
 
 async function labelsFor(facets: FacetCounts, q: SearchQuery): Promise<SearchAnswer<unknown>["labels"]> {
   const ids = (field: string, chosen: number[]) => [...new Set([...Object.keys(facets[field] ?? {}).map(Number), ...chosen])].filter((n) => n > 0);
@@ -57,26 +77,29 @@ async function labelsFor(facets: FacetCounts, q: SearchQuery): Promise<SearchAns
  * from the caller, to every query: a reader gets vetted regions of published sources, and proposed
  * work only when asking for it.
  */
-export async function searchArchive(actor: Actor | null, q: SearchQuery): Promise<SearchAnswer<RegionDocument | SourceDocument>> {
+export async function searchArchive(actor: Actor | null, q: SearchQuery): Promise<SearchAnswer<SearchHit>> {
   authorize(actor, "archive.read");
   if (q.proposed) authorize(actor, "archive.read_proposed");
   const visibility = q.scope === "regions" ? regionVisibilityFilter(actor, { proposed: q.proposed }) : sourceVisibilityFilter(actor);
-  const filter = [...visibility, ...requestFilters(q)];
+  const near = await resolveNear(q);
+  const filter = [...visibility, ...requestFilters(q, near)];
   let answer;
   try {
     answer = await search()
       .index(liveIndex(q.scope))
-      .search(q.q || null, { filter, facets: ["*"], sort: SORTS[q.sort], page: q.page, hitsPerPage: q.perPage });
+      .search(q.q || null, { filter, facets: ["*"], sort: sortFor(q.sort, near), page: q.page, hitsPerPage: q.perPage });
   } catch (error) {
     const missing = error instanceof MeilisearchApiError && error.cause?.code === "index_not_found";
     if (missing || error instanceof MeilisearchRequestError || error instanceof MeilisearchRequestTimeOutError) throw new SearchUnavailableError();
     throw error;
   }
   const facetDistribution = Object.fromEntries(Object.entries(answer.facetDistribution ?? {}).filter(([name]) => isPublicFacet(q.scope, name)));
+  const hits = answer.hits as (RegionDocument | SourceDocument)[];
   return {
-    hits: answer.hits as (RegionDocument | SourceDocument)[],
+    hits: near ? withDistances(hits, near) : hits,
     facetDistribution,
     labels: await labelsFor(facetDistribution, q),
+    near,
     total: answer.totalHits ?? 0,
     page: answer.page ?? q.page,
     perPage: answer.hitsPerPage ?? q.perPage,
@@ -107,10 +130,11 @@ export async function searchChartHits(actor: Actor | null, q: SearchQuery, optio
   const visibility = q.scope === "regions" ? regionVisibilityFilter(actor, { proposed: q.proposed }) : sourceVisibilityFilter(actor);
   const fields = ["regionId", "dateFrom", "dateTo", "dated", "placeId", "place", "country", "_geo"];
   if (options.stackAspect && /^[a-z0-9_]{1,60}$/.test(options.stackAspect)) fields.push(`t_${options.stackAspect}`);
+  const near = await resolveNear(q);
   try {
     const answer = await search()
       .index(liveIndex(q.scope))
-      .search(q.q || null, { filter: [...visibility, ...requestFilters(q)], limit: options.limit ?? 5_000, offset: 0, attributesToRetrieve: fields });
+      .search(q.q || null, { filter: [...visibility, ...requestFilters(q, near)], limit: options.limit ?? 5_000, offset: 0, attributesToRetrieve: fields });
     return { hits: answer.hits as unknown as ChartHit[], total: answer.estimatedTotalHits ?? answer.hits.length };
   } catch (error) {
     const missing = error instanceof MeilisearchApiError && error.cause?.code === "index_not_found";

@@ -124,3 +124,43 @@ test("a reader searches, narrows by facets, dates and the map, and never sees un
   await search.expectRegions([sevilleA, naples, sevilleLate, plucked]);
   expect(await search.regionIds()).not.toContain(unvetted);
 });
+
+// Rome to Naples is about 190 km in a straight line (from memory); Seville is some 1,900 km further west.
+test("a visitor keeps the evidence within a distance of a place, sorts it nearest first and removes the filter", async ({ page }) => {
+  const search = new SearchPage(page);
+  await page.goto(`/search?q=${WORD}`);
+  await search.expectRegions([sevilleA, naples, sevilleLate, plucked]);
+
+  await search.chooseNearPlace("Rome", /^Rome — 07, Italy/);
+  await search.applyDistance(100);
+  await expect(search.nearChip).toHaveText(/Within 100 km of Rome, Italy/);
+  await search.expectRegions([]);
+  await expect(page.getByText("Nothing matches this search")).toBeVisible();
+
+  // The place stays chosen; a wider distance reaches Naples but not Seville.
+  await expect(page.getByRole("combobox", { name: "Near the place" })).toHaveValue("Rome");
+  await search.applyDistance(250);
+  await expect(search.nearChip).toHaveText(/Within 250 km of Rome, Italy/);
+  await search.expectRegions([naples, plucked]);
+  await expect(page.getByTestId("live-count")).toContainText("2 matches");
+
+  await page.getByRole("link", { name: "Distance, nearest first" }).click();
+  await expect(page).toHaveURL(/sort=distance/);
+  await page.getByRole("link", { name: "Table", exact: true }).click();
+  await expect(page).toHaveURL(/view=table/);
+  await search.expectRegions([naples, plucked]);
+  const distances = await page.getByTestId("result-distance").allTextContents();
+  expect(distances).toHaveLength(2);
+  for (const text of distances) {
+    const km = Number(/^(\d+) km$/.exec(text)?.[1]);
+    expect(km).toBeGreaterThan(180);
+    expect(km).toBeLessThan(195);
+  }
+  await page.screenshot({ path: `${SHOTS}/search-near.png`, fullPage: true });
+
+  await page.getByRole("link", { name: "Remove the filter within 250 km of Rome, Italy" }).click();
+  await expect(page).not.toHaveURL(/near=|km=|sort=distance/);
+  await expect(search.nearChip).toHaveCount(0);
+  await search.expectRegions([sevilleA, naples, sevilleLate, plucked]);
+  await expect(page.getByRole("link", { name: "Distance, nearest first" })).toHaveCount(0);
+});

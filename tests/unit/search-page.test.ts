@@ -1,5 +1,8 @@
 // The search page's address helpers and its charts' inputs (pure).
+import { createElement } from "react";
+import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
+import { NearChip } from "@/components/search/near-chip";
 import { isoDay, searchHistogram, searchPlaces } from "@/lib/search/page/charts";
 import { decadeHref, facetParam, toggleValue, toUrlParams, withParams } from "@/lib/search/page/url";
 import type { ChartHit } from "@/lib/search/query";
@@ -73,5 +76,24 @@ describe("the search charts' inputs", () => {
     expect(s.countries).toEqual([{ code: "ES", count: 2 }, { code: "IT", count: 1 }]);
     expect(s.unplaced).toBe(1);
     expect(s.withoutCoordinates).toBe(1);
+  });
+});
+
+describe("the chip of a search near a place", () => {
+  const near = {
+    place: { id: 7, kind: "city" as const, name: "Sevilla", countryCode: "ES", country: "Spain", subdivisionCode: "51", latitude: 37.38, longitude: -5.97 },
+    km: 100,
+  };
+  const chip = (query: Record<string, string>) => renderToStaticMarkup(createElement(NearChip, { near, params: toUrlParams(query) }));
+
+  it("says how far from where, and removes the place, the distance and the sort by distance", () => {
+    const html = chip({ q: "lute", near: "7", km: "100", sort: "distance", page: "2" });
+    expect(html).toContain("Within 100 km of Sevilla, Spain");
+    expect(html).toContain('aria-label="Remove the filter within 100 km of Sevilla, Spain"');
+    expect(html).toContain('href="/search?q=lute"');
+  });
+
+  it("keeps any other sort", () => {
+    expect(chip({ near: "7", km: "100", sort: "date", country: "ES" })).toContain('href="/search?sort=date&amp;country=ES"');
   });
 });

@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { FacetPanel } from "@/components/search/facet-panel";
+import { NearChip } from "@/components/search/near-chip";
+import { NearFilter } from "@/components/search/near-filter";
 import { SearchBox } from "@/components/search/search-box";
 import { SearchCharts } from "@/components/search/search-charts";
 import { ResultGrid, ResultTable } from "@/components/search/search-results";
@@ -15,6 +17,7 @@ import { boxAround } from "@/lib/charts/projection";
 import { worldMap } from "@/lib/charts/world-map";
 import { ValidationError } from "@/lib/errors";
 import type { RegionDocument } from "@/lib/search/documents";
+import { nearKm } from "@/lib/search/near";
 import { CHART_LIMIT, searchHistogram, searchPlaces } from "@/lib/search/page/charts";
 import { facetGroups } from "@/lib/search/page/facets";
 import { toUrlParams, withParams, type RawParams } from "@/lib/search/page/url";
@@ -25,7 +28,7 @@ import { DateFilter, Pager, SortAndView } from "./controls";
 
 export const metadata: Metadata = { title: "Search the evidence" };
 
-const SORT_LABELS = { relevance: "Relevance", date: "Date, earliest first", date_desc: "Date, latest first", recent: "Recently added" } as const;
+const SORT_LABELS = { relevance: "Relevance", date: "Date, earliest first", date_desc: "Date, latest first", recent: "Recently added", distance: "Distance, nearest first" } as const;
 
 export default async function SearchPage({ searchParams }: { searchParams: Promise<RawParams> }) {
   const actor = await currentActor();
@@ -70,7 +73,10 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
     }
     throw error;
   }
-  const hits = answer.hits as RegionDocument[];
+  const hits = answer.hits as (RegionDocument & { distanceKm?: number | null })[];
+  const near = answer.near;
+  // Sorting by distance is offered only while a place is chosen.
+  const sortLabels = Object.fromEntries(Object.entries(SORT_LABELS).filter(([key]) => key !== "distance" || near)) as Record<string, string>;
   const groups = facetGroups(answer.facetDistribution, answer.labels, vocabulary, name, params);
   const stackOptions = vocabulary
     .filter((a) => a.kind === "terms" && !a.deprecated)
@@ -84,6 +90,7 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
       <div className="grid gap-6 lg:grid-cols-[16rem_1fr]">
         <aside className="space-y-6">
           <DateFilter params={params} />
+          <NearFilter key={`${near?.place.id ?? ""}-${near?.km ?? ""}`} place={near?.place ?? null} km={nearKm(query)} />
           {mayPropose && (
             <p className="text-sm">
               <Link href={withParams(params, { proposed: query.proposed ? null : "1" })} role="checkbox" aria-checked={query.proposed}>
@@ -99,12 +106,13 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
               <h2 id="results-title" className="text-xl" data-testid="result-total">
                 {answer.total} {answer.total === 1 ? "region" : "regions"}
               </h2>
-              <SortAndView params={params} sort={query.sort} view={view} labels={SORT_LABELS} />
+              <SortAndView params={params} sort={query.sort} view={view} labels={sortLabels} />
             </div>
+            {near && <NearChip near={near} params={params} />}
             {hits.length === 0 ? (
               <EmptyState title="Nothing matches this search">Remove a filter or try other words.</EmptyState>
             ) : view === "table" ? (
-              <ResultTable hits={hits} proposed={query.proposed} />
+              <ResultTable hits={hits} proposed={query.proposed} showDistance={near !== null} />
             ) : (
               <ResultGrid hits={hits} proposed={query.proposed} />
             )}

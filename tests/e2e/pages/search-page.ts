@@ -42,6 +42,29 @@ export class SearchPage {
     await expect(this.page).toHaveURL(new RegExp(`from=${from}.*to=${to}|to=${to}.*from=${from}`));
   }
 
+  /** Chooses a gazetteer place by keyboard, as a person would: type, arrow down to it, Enter. */
+  async chooseNearPlace(typed: string, option: RegExp) {
+    const box = this.page.getByRole("combobox", { name: "Near the place" });
+    await box.pressSequentially(typed, { delay: 30 });
+    await expect(this.page.getByRole("option", { name: option })).toBeVisible();
+    for (let i = 0; i < 10; i++) {
+      await box.press("ArrowDown");
+      if (await this.page.getByRole("option", { name: option, selected: true }).isVisible()) break;
+    }
+    await box.press("Enter");
+    await expect(box).toHaveValue(typed);
+  }
+
+  async applyDistance(km: number) {
+    await this.page.getByRole("combobox", { name: "Within", exact: true }).selectOption(String(km));
+    await this.page.getByRole("button", { name: "Apply distance" }).click();
+    await expect(this.page).toHaveURL(new RegExp(`near=\\d+&km=${km}`));
+  }
+
+  get nearChip() {
+    return this.page.getByTestId("near-chip");
+  }
+
   country(name: string) {
     return this.page.getByRole("link", { name: new RegExp(`^${name}: `) });
   }
