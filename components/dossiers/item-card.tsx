@@ -3,6 +3,7 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { iiifBase, thumbnailUrl } from "@/components/images/image-types";
+import { AddToLightTable } from "@/components/light-table/add-to-light-table";
 import { citeItem, type CitedItem } from "@/lib/dossiers/citation";
 import type { DossierItemView } from "@/lib/dossiers/types";
 import { regionUrl } from "@/lib/iiif/fragments";
@@ -34,7 +35,17 @@ function Picture({ item, size }: { item: DossierItemView; size: number }) {
   );
 }
 
-export function ItemCard({ item, baseUrl, accessed, size = 400, controls }: { item: DossierItemView; baseUrl: string; accessed: string; size?: number; controls?: ReactNode }) {
+type CardProps = {
+  item: DossierItemView;
+  baseUrl: string;
+  accessed: string;
+  size?: number;
+  controls?: ReactNode;
+  /** Offer "Add to light table" on a region (the page; not the print page). */
+  gather?: boolean;
+};
+
+export function ItemCard({ item, baseUrl, accessed, size = 400, controls, gather = false }: CardProps) {
   const s = item.source;
   const citation = citeItem(cited(item), { baseUrl, accessed });
   const region = item.kind === "region" ? item.region : null;
@@ -82,6 +93,7 @@ export function ItemCard({ item, baseUrl, accessed, size = 400, controls }: { it
           <span className="font-semibold">Cite as: </span>
           {citation.segments.map((seg, n) => (seg.italic ? <i key={n}>{seg.text}</i> : <span key={n}>{seg.text}</span>))}
         </p>
+        {gather && region && <AddToLightTable regionId={region.id} proposed={region.state !== "vetted"} showOpen={false} className="mt-2" />}
         {controls}
       </div>
     </article>

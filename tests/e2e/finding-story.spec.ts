@@ -134,6 +134,10 @@ test("a new scholar finds, narrows, compares, keeps and exports the evidence; th
   await form.getByRole("link", { name: `Open “${title}”` }).click();
   await expect(page.getByRole("heading", { level: 1, name: title })).toBeVisible();
 
+  // The dossier lays its regions on the light table again, in its order, and offers each to gather.
+  await expect(page.getByRole("link", { name: "Lay its 4 regions on the light table" })).toHaveAttribute("href", `/light-table?r=${spain.join(",")}`);
+  await expect(page.getByRole("button", { name: "On the light table ✓" })).toHaveCount(4);
+
   // Exports it: the CSV (read back by an RFC 4180 parser) and the printable page, a citation per item.
   const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Download as CSV" }).click()]);
   const rows = Papa.parse<Record<string, string>>(readFileSync((await download.path())!, "utf8"), { header: true, skipEmptyLines: true }).data;

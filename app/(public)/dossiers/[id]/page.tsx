@@ -4,11 +4,13 @@ import { ItemCard, itemLabel } from "@/components/dossiers/item-card";
 import { DossierOwnerActions } from "@/components/dossiers/dossier-owner-actions";
 import { DossierSharing } from "@/components/dossiers/dossier-sharing";
 import { ItemControls } from "@/components/dossiers/item-controls";
+import { OpenLightTableLink } from "@/components/light-table/add-to-light-table";
 import { OrderedItems, type OrderEntry } from "@/components/dossiers/ordered-items";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Notice } from "@/components/ui/notice";
 import { appUrl } from "@/lib/config";
 import { accessedOn } from "@/lib/dossiers/citation";
+import { lightTableHref, MAX_REGIONS } from "@/lib/light-table/links";
 import { dossierCsvPath, dossierPrintPath, VISIBILITY_LABELS, type DossierItemView, type WithheldItem } from "@/lib/dossiers/types";
 import { loadDossier } from "./load";
 
@@ -33,6 +35,9 @@ export default async function DossierPage({ params }: Props) {
   ].sort((a, b) => a.position - b.position || a.id - b.id);
   const label = (e: Entry) => (e.item ? itemLabel(e.item) : `a ${e.withheld!.kind} you can no longer see`);
   const order: OrderEntry[] = entries.map((e) => ({ id: e.id, version: e.version, label: label(e) }));
+  // The dossier's regions side by side, in its order; proposed ones only where this reader sees them here.
+  const regions = dossier.items.flatMap((item) => (item.kind === "region" ? [item.region] : []));
+  const tableHref = regions.length ? lightTableHref(regions.slice(0, MAX_REGIONS).map((r) => r.id), { proposed: regions.some((r) => r.state !== "vetted") }) : null;
 
   return (
     <article>
@@ -47,6 +52,12 @@ export default async function DossierPage({ params }: Props) {
             Download as CSV
           </a>
           <Link href={dossierPrintPath(dossier.id)}>Printable page</Link>
+          {tableHref && (
+            <Link href={tableHref}>
+              Lay {regions.length === 1 ? "its region" : regions.length > MAX_REGIONS ? `its first ${MAX_REGIONS} regions` : `its ${regions.length} regions`} on the light table
+            </Link>
+          )}
+          <OpenLightTableLink label="Open the regions you gathered" />
         </p>
         {mine && (
           <div className="mt-4">
@@ -82,6 +93,7 @@ export default async function DossierPage({ params }: Props) {
                     item={e.item}
                     baseUrl={baseUrl}
                     accessed={accessed}
+                    gather
                     controls={mine && !dossier.deletedAt ? <ItemControls dossierId={dossier.id} itemId={e.id} version={e.version} note={e.item.note} label={label(e)} /> : undefined}
                   />
                 ) : (
