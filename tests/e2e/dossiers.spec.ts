@@ -3,6 +3,9 @@ import { expect, test } from "@playwright/test";
 import Papa from "papaparse";
 import { expectSignedIn, SignInPage } from "./pages/sign-in-page";
 
+// Twenty-odd saves and page loads in one story: on a busy machine it takes close to the default 30 s.
+test.describe.configure({ timeout: 90_000 });
+
 test("a reader starts a dossier, adds sources from their pages, reorders and annotates them, downloads the CSV and opens the print page", async ({ page }) => {
   const title = `Plucking hands ${Date.now().toString(36)}`;
   const signIn = new SignInPage(page);
