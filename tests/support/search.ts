@@ -32,12 +32,15 @@ export async function searchAs(jar: Jar | undefined, query: string): Promise<Ans
 /** Region ids with the version each hit shows, sorted: "12:vetted". */
 export const ids = (a: Answer) => a.hits.map((h) => `${h.regionId}:${h.copy}`).sort();
 
-/** Polls until the check holds; the last failure is reported if it never does. */
+/**
+ * Polls until the check holds; the last failure is reported if it never does. A read that fails (a
+ * keep-alive connection the app closed while a service restarted) counts as "not yet", like a failed check.
+ */
 export async function eventually<T>(read: () => Promise<T>, check: (value: T) => void, timeoutMs = 90_000): Promise<T> {
   const end = Date.now() + timeoutMs;
   for (;;) {
-    const value = await read();
     try {
+      const value = await read();
       check(value);
       return value;
     } catch (error) {
