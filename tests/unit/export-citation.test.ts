@@ -1,15 +1,17 @@
-// Suggested citations of dossier items, in the manner of the Chicago Manual of Style's notes for works
+// Suggested citations of dossier items and search results, in the manner of the Chicago Manual of Style's notes for works
 // of art (from memory, common practice: artist, italic title, date, medium, collection, city, then the
-// online copy with the access date before the URL), and the CSV export against RFC 4180 §2.
+// online copy with the access date before the URL), and the CSV records both exports share, against
+// RFC 4180 §2.
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
-import { accessedOn, citeItem, permalink } from "@/lib/dossiers/citation";
-import { CSV_COLUMNS, csvFileName, dossierCsv } from "@/lib/dossiers/csv";
-import type { DossierItemView, DossierSourceSummary } from "@/lib/dossiers/types";
+import type { DossierItemView } from "@/lib/dossiers/types";
+import { accessedOn, citeItem, permalink } from "@/lib/exports/citation";
+import type { SourceSummary } from "@/lib/exports/cited-items";
+import { CSV_COLUMNS, csvFileName, evidenceCsv } from "@/lib/exports/csv";
 import type { RegionView } from "@/lib/regions/types";
 
 const BASE = "https://archive.example/";
-const source: DossierSourceSummary = {
+const source: SourceSummary = {
   id: 12,
   title: "Lute Player by a Window",
   objectType: "painting",
@@ -117,7 +119,7 @@ describe("CSV export (RFC 4180 §2)", () => {
     },
     { id: 2, kind: "source", position: 1, note: "=SUM(A1:A2)", version: 1, source: { ...source, id: 13, title: "Plain title" } },
   ];
-  const csv = dossierCsv({ items }, { baseUrl: BASE, accessed: "2031-02-03" });
+  const csv = evidenceCsv(items, { baseUrl: BASE, accessed: "2031-02-03" });
 
   it("ends each record with CRLF and starts with a header naming every column (§2.1, §2.3)", () => {
     expect(csv.split("\r\n")[0]).toBe(CSV_COLUMNS.join(","));
