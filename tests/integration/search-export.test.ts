@@ -170,6 +170,10 @@ describe("a search as a printable list", () => {
     expect(html).not.toContain(`later b ${word}`);
     expect(html).toContain(`accession no. ${accession}`);
     expect(html).toContain(`accessed ${today()}`);
+    // React separates adjacent pieces of text with empty comments.
+    const first = (await (await call(`/search/print?q=${word}&sort=date&limit=2`, { jar: bench.reader })).text()).replaceAll("<!-- -->", "");
+    expect(first).toContain("The search matches 3 regions; this list holds the first 2, in the search’s order.");
+    expect(first.match(/data-testid="printed-region"/g)).toHaveLength(2);
     const unvetted = await (await call(`/search/print?q=${word}`, { jar: bench.reader })).text();
     expect(unvetted).not.toContain(`proposed ${word}`);
     expect(unvetted).not.toContain(`draft ${word}`);
