@@ -5,7 +5,7 @@ import { dossierItems, dossiers, dossierShares, regions, users } from "@/db/sche
 import { authorize, type Actor } from "@/lib/auth/policy";
 import { NotFoundError } from "@/lib/errors";
 import { selectRegionViews } from "@/lib/regions/queries";
-import { sourceSummaries } from "./summaries";
+import { sourceSummaries } from "@/lib/sources/summaries";
 import type { DossierItemView, DossierShare, DossierSummary, DossierView, WithheldItem } from "./types";
 
 // Who may read which dossiers, as a condition inside every query: the owner, the people it is shared

@@ -1,29 +1,11 @@
 // What the dossier API answers, shared by the server and the client components. Pure types.
 import type { DossierItemKind, DossierVisibility } from "./vocab";
 import type { RegionView } from "@/lib/regions/types";
-import type { AttributionQualifier, ObjectType } from "@/lib/sources/vocab";
+import type { SourceSummary } from "@/lib/exports/cited-items";
 
 export type { DossierItemKind, DossierVisibility };
 
-/** The catalogue facts a caption and a citation need, of a source the viewer may see. */
-export type DossierSourceSummary = {
-  id: number;
-  title: string;
-  objectType: ObjectType;
-  artist: string | null;
-  attributionQualifier: AttributionQualifier;
-  datingEdtf: string | null;
-  medium: string | null;
-  /** "Köln — 07, Germany", or null when the place of making is not known. */
-  place: string | null;
-  collectionName: string | null;
-  collectionCity: string | null;
-  accessionNumber: string | null;
-  /** The first processed photograph, for a thumbnail. */
-  imageId: number | null;
-};
-
-type ItemBase = { id: number; position: number; note: string | null; version: number; source: DossierSourceSummary };
+type ItemBase = { id: number; position: number; note: string | null; version: number; source: SourceSummary };
 export type DossierRegionItem = ItemBase & { kind: "region"; region: RegionView };
 export type DossierSourceItem = ItemBase & { kind: "source" };
 export type DossierItemView = DossierRegionItem | DossierSourceItem;

@@ -38,6 +38,12 @@ export class SearchUnavailableError extends AppError {
   }
 }
 
+/** A missing index or an unreachable service is the one 503 every search shares; anything else is a bug. */
+function unavailable(error: unknown): unknown {
+  const missing = error instanceof MeilisearchApiError && error.cause?.code === "index_not_found";
+  return missing || error instanceof MeilisearchRequestError || error instanceof MeilisearchRequestTimeOutError ? new SearchUnavailableError() : error;
+}
+
 // Facets a caller may see counted; the rest (author, flags the visibility filter reads) stay internal.
 const SHARED_FACETS = ["objectType", "country", "collectionId", "placeId", "decade", "century"];
 const REGION_FACETS = new Set([...SHARED_FACETS, "confidence", "state", "aspects"]);
@@ -58,7 +64,8 @@ export async function resolveNear(q: Pick<SearchQuery, "near" | "km">): Promise<
   return { place: { id, kind, name, countryCode, country, subdivisionCode, latitude, longitude }, km: nearKm(q) };
 }
 
-async function labelsFor(facets: FacetCounts, q: SearchQuery): Promise<SearchAnswer<unknown>["labels"]> {
+/** Names of the collections and places the facets count and the query filters on, by id. */
+export async function labelsFor(facets: FacetCounts, q: SearchQuery): Promise<SearchAnswer<unknown>["labels"]> {
   const ids = (field: string, chosen: number[]) => [...new Set([...Object.keys(facets[field] ?? {}).map(Number), ...chosen])].filter((n) => n > 0);
   const collectionIds = ids("collectionId", q.collection);
   const placeIds = ids("placeId", q.place);
@@ -89,9 +96,7 @@ export async function searchArchive(actor: Actor | null, q: SearchQuery): Promis
       .index(liveIndex(q.scope))
       .search(q.q || null, { filter, facets: ["*"], sort: sortFor(q.sort, near), page: q.page, hitsPerPage: q.perPage });
   } catch (error) {
-    const missing = error instanceof MeilisearchApiError && error.cause?.code === "index_not_found";
-    if (missing || error instanceof MeilisearchRequestError || error instanceof MeilisearchRequestTimeOutError) throw new SearchUnavailableError();
-    throw error;
+    throw unavailable(error);
   }
   const facetDistribution = Object.fromEntries(Object.entries(answer.facetDistribution ?? {}).filter(([name]) => isPublicFacet(q.scope, name)));
   const hits = answer.hits as (RegionDocument | SourceDocument)[];
@@ -137,8 +142,27 @@ export async function searchChartHits(actor: Actor | null, q: SearchQuery, optio
       .search(q.q || null, { filter: [...visibility, ...requestFilters(q, near)], limit: options.limit ?? 5_000, offset: 0, attributesToRetrieve: fields });
     return { hits: answer.hits as unknown as ChartHit[], total: answer.estimatedTotalHits ?? answer.hits.length };
   } catch (error) {
-    const missing = error instanceof MeilisearchApiError && error.cause?.code === "index_not_found";
-    if (missing || error instanceof MeilisearchRequestError || error instanceof MeilisearchRequestTimeOutError) throw new SearchUnavailableError();
-    throw error;
+    throw unavailable(error);
+  }
+}
+
+/**
+ * The region ids of the first `limit` hits of a search, in the search's own order (its sort, or
+ * relevance), under the same visibility filter, and how many regions it matches in all; for exports,
+ * which read the regions themselves from the database.
+ */
+export async function searchRegionIds(actor: Actor | null, q: SearchQuery, limit: number): Promise<{ ids: number[]; total: number }> {
+  authorize(actor, "archive.read");
+  if (q.proposed) authorize(actor, "archive.read_proposed");
+  const near = await resolveNear(q);
+  const filter = [...regionVisibilityFilter(actor, { proposed: q.proposed }), ...requestFilters(q, near)];
+  try {
+    // page/hitsPerPage rather than limit/offset: the service then counts the matches exactly.
+    const answer = await search()
+      .index(liveIndex("regions"))
+      .search(q.q || null, { filter, sort: sortFor(q.sort, near), page: 1, hitsPerPage: limit, attributesToRetrieve: ["regionId"] });
+    return { ids: (answer.hits as { regionId: number }[]).map((h) => h.regionId), total: answer.totalHits ?? answer.hits.length };
+  } catch (error) {
+    throw unavailable(error);
   }
 }

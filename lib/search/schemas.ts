@@ -6,6 +6,7 @@
 import { z } from "zod";
 import { CONFIDENCES, REGION_STATES } from "@/db/schema/regions";
 import { OBJECT_TYPES } from "@/lib/sources/vocab";
+import { PRESENTATION_PARAMS } from "./page/url";
 
 const KEY = /^[a-z0-9_]{1,60}$/;
 const DATE_END = /^\d{1,4}(-\d{2}(-\d{2})?)?$/;
@@ -65,5 +66,24 @@ export function searchParamsToQuery(params: URLSearchParams): Record<string, unk
     if (key.startsWith("t_")) (out.terms as Record<string, string[]>)[key.slice(2)] = values(key);
     if (key.startsWith("n_")) (out.counts as Record<string, string[]>)[key.slice(2)] = values(key);
   }
+  return out;
+}
+
+// Exports of a search: the CSV holds up to EXPORT_LIMIT regions, the printable list (crops for paper)
+// up to PRINT_LIMIT; `limit` asks for fewer. Both hold the first regions in the search's own order.
+export const EXPORT_LIMIT = 5_000;
+export const PRINT_LIMIT = 250;
+
+export const searchExportSchema = (max: number) =>
+  searchQuerySchema.extend({ limit: positiveInt.max(max, `At most ${max.toLocaleString("en")} regions at a time.`).default(max) });
+export type SearchExportQuery = z.output<ReturnType<typeof searchExportSchema>>;
+
+/** The search page's parameters → an export's (regions only, every page, an optional `limit`). */
+export function exportParamsToQuery(params: URLSearchParams): Record<string, unknown> {
+  const search = new URLSearchParams(params);
+  for (const key of PRESENTATION_PARAMS) search.delete(key);
+  const out = searchParamsToQuery(search);
+  const limit = params.get("limit")?.trim();
+  if (limit) out.limit = limit;
   return out;
 }

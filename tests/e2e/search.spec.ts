@@ -1,4 +1,6 @@
+import { readFileSync } from "node:fs";
 import { expect, test } from "@playwright/test";
+import Papa from "papaparse";
 import type { RegionView } from "@/lib/regions/types";
 import { call, DEMO, signedIn, type Jar } from "../support/app";
 import { photographedSource, vocabulary } from "../support/evidence";
@@ -163,4 +165,51 @@ test("a visitor keeps the evidence within a distance of a place, sorts it neares
   await expect(search.nearChip).toHaveCount(0);
   await search.expectRegions([sevilleA, naples, sevilleLate, plucked]);
   await expect(page.getByRole("link", { name: "Distance, nearest first" })).toHaveCount(0);
+});
+
+test("a reader downloads every result as CSV and opens the printable list, in the search's order", async ({ page }) => {
+  const signIn = new SignInPage(page);
+  await signIn.open();
+  await signIn.withPassword(DEMO.reader);
+  await expectSignedIn(page, "reader");
+
+  // The table view of page 1, sorted by date: the exports carry the search, not the page or the view.
+  await page.goto(`/search?q=${WORD}&t_right_hand_technique=strumming&sort=date&view=table&perPage=2`);
+  const search = new SearchPage(page);
+  await expect(search.results).toHaveCount(2);
+  const csvLink = page.getByRole("link", { name: "Download these results as CSV" });
+  await expect(csvLink).toHaveAttribute("href", `/api/search/export.csv?q=${WORD}&t_right_hand_technique=strumming&sort=date`);
+
+  const [download] = await Promise.all([page.waitForEvent("download"), csvLink.click()]);
+  const today = new Date().toISOString().slice(0, 10);
+  expect(download.suggestedFilename()).toBe(`search-${WORD}-${today}.csv`);
+  const rows = Papa.parse<Record<string, string>>(readFileSync((await download.path())!, "utf8"), { header: true, skipEmptyLines: true }).data;
+  // Every page of the results (three, though the page shows two), earliest first: 1625, 1680, 1750.
+  expect(rows.map((r) => Number(r.region_id))).toEqual([sevilleA, naples, sevilleLate]);
+  expect(rows.map((r) => r.region_label)).toEqual([`Strummer in Seville ${WORD}`, `Strummer in Naples ${WORD}`, `Late strummer ${WORD}`]);
+  expect(rows.every((r) => r.review_state === "vetted" && r.citation.includes(`accessed ${today}`))).toBe(true);
+  expect(rows.map((r) => Number(r.region_id))).not.toContain(unvetted);
+
+  await page.getByRole("link", { name: "Printable list" }).click();
+  await expect(page).toHaveURL(/\/search\/print\?/);
+  const heading = page.getByRole("heading", { level: 1 });
+  await expect(heading).toContainText(`Regions matching “${WORD}”`);
+  await expect(heading).toContainText("Right-hand technique: strumming");
+  await expect(page.getByText(`Sorted by date, earliest first · exported ${today}`)).toBeVisible();
+  const printed = page.getByTestId("printed-region");
+  await expect(printed).toHaveCount(3);
+  expect(await printed.evaluateAll((els) => els.map((e) => Number(e.getAttribute("data-region"))))).toEqual([sevilleA, naples, sevilleLate]);
+  await expect(printed.first().getByRole("img", { name: `Detail: Strummer in Seville ${WORD} of`, exact: false })).toBeVisible();
+  await expect(printed.first().getByText("Cite as:")).toBeVisible();
+  await expect(page.getByRole("button", { name: "Print" })).toBeVisible();
+  await page.screenshot({ path: `${SHOTS}/search-print.png`, fullPage: true });
+  // On paper the site's header and the page's own links are left out.
+  await page.emulateMedia({ media: "print" });
+  await expect(page.getByRole("banner").first()).toBeHidden();
+  await expect(page.getByRole("button", { name: "Print" })).toBeHidden();
+  await expect(page.getByRole("link", { name: "Back to the search" })).toBeHidden();
+  await expect(heading).toBeVisible();
+  await page.emulateMedia({ media: "screen" });
+  await page.getByRole("link", { name: "Back to the search" }).click();
+  await expect(page).toHaveURL(new RegExp(`/search\\?q=${WORD}&t_right_hand_technique=strumming&sort=date$`));
 });

@@ -20,6 +20,7 @@ const EXPECTED: Record<string, Partial<Record<"GET" | "POST" | "PATCH" | "PUT" |
   "/api/admin/audit": { GET: "admin" },
   "/api/admin/reindex": { GET: "admin", POST: "admin" },
   "/api/search": { GET: "public" },
+  "/api/search/export.csv": { GET: "public" },
   "/api/places": { GET: "public", POST: "editor" },
   "/api/places/[id]": { GET: "public", PATCH: "editor" },
   "/api/collections": { GET: "public", POST: "contributor" },

@@ -20,15 +20,14 @@ import type { RegionDocument } from "@/lib/search/documents";
 import { nearKm } from "@/lib/search/near";
 import { CHART_LIMIT, searchHistogram, searchPlaces } from "@/lib/search/page/charts";
 import { facetGroups } from "@/lib/search/page/facets";
-import { toUrlParams, withParams, type RawParams } from "@/lib/search/page/url";
+import { exportHref, toUrlParams, withParams, type RawParams } from "@/lib/search/page/url";
+import { SORT_LABELS } from "@/lib/search/page/words";
 import { SearchUnavailableError, searchArchive, searchChartHits } from "@/lib/search/query";
-import { searchParamsToQuery, searchQuerySchema } from "@/lib/search/schemas";
+import { EXPORT_LIMIT, PRINT_LIMIT, searchParamsToQuery, searchQuerySchema } from "@/lib/search/schemas";
 import { listVocabulary } from "@/lib/vocabulary/queries";
 import { DateFilter, Pager, SortAndView } from "./controls";
 
 export const metadata: Metadata = { title: "Search the evidence" };
-
-const SORT_LABELS = { relevance: "Relevance", date: "Date, earliest first", date_desc: "Date, latest first", recent: "Recently added", distance: "Distance, nearest first" } as const;
 
 export default async function SearchPage({ searchParams }: { searchParams: Promise<RawParams> }) {
   const actor = await currentActor();
@@ -124,6 +123,7 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
                 <OpenLightTableLink proposed={query.proposed} label="Open the regions you gathered" />
               </p>
             )}
+            {hits.length > 0 && <ExportLinks params={params} total={answer.total} />}
             <Pager params={params} page={answer.page} totalPages={answer.totalPages} />
           </section>
           {answer.total > 0 && (
@@ -143,5 +143,30 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
         </div>
       </div>
     </>
+  );
+}
+
+const many = (n: number) => n.toLocaleString("en");
+
+/** Every page of these results, not only the one shown, as CSV and as a list for paper; each says its cap. */
+function ExportLinks({ params, total }: { params: URLSearchParams; total: number }) {
+  return (
+    <div className="text-sm">
+      <p className="flex flex-wrap gap-4">
+        <a href={exportHref(params, "csv")} download>
+          Download these results as CSV
+        </a>
+        <Link href={exportHref(params, "print")}>Printable list</Link>
+      </p>
+      {total > EXPORT_LIMIT ? (
+        <p className="text-xs text-ink-faint" data-testid="export-cap">
+          The CSV holds the first {many(EXPORT_LIMIT)} of these {many(total)} regions and the printable list the first {many(PRINT_LIMIT)}, in the order shown.
+        </p>
+      ) : total > PRINT_LIMIT ? (
+        <p className="text-xs text-ink-faint" data-testid="export-cap">
+          The CSV holds all {many(total)} regions; the printable list the first {many(PRINT_LIMIT)}, in the order shown.
+        </p>
+      ) : null}
+    </div>
   );
 }

@@ -4,11 +4,9 @@ import { OBJECT_TYPE_LABELS, type ObjectType } from "@/lib/sources/vocab";
 import type { AspectView } from "@/lib/vocabulary/types";
 import type { FacetCounts, SearchAnswer } from "@/lib/search/query";
 import { facetParam, listValues } from "./url";
+import { centuryLabel, CONFIDENCE_LABELS, STATE_LABELS } from "./words";
 
 export type FacetGroup = { param: string; title: string; values: { value: string; label: string; count: number }[] };
-
-const CONFIDENCE_LABELS: Record<string, string> = { certain: "Certain", probable: "Probable", possible: "Possible" };
-const STATE_LABELS: Record<string, string> = { draft: "Draft", proposed: "Proposed", vetted: "Vetted", returned: "Returned", withdrawn: "Withdrawn" };
 
 export function facetGroups(
   facets: FacetCounts,
@@ -38,7 +36,7 @@ export function facetGroups(
     group("objectType", "Object type", (v) => OBJECT_TYPE_LABELS[v as ObjectType] ?? v),
     group("country", "Country", countryName),
     group("collectionId", "Collection", (v) => labels.collectionId[v] ?? `Collection ${v}`),
-    group("century", "Century", (v) => `${Number(v) / 100 + 1}th century`, "value"),
+    group("century", "Century", (v) => centuryLabel(Number(v)), "value"),
     group("decade", "Decade", (v) => `${v}s`, "value"),
     group("confidence", "Confidence", (v) => CONFIDENCE_LABELS[v] ?? v),
     group("state", "Review state", (v) => STATE_LABELS[v] ?? v),

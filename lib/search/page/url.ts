@@ -1,6 +1,9 @@
 // The search page's address: every filter, the sort, the page and the view live in it, so any search
 // can be shared. Pure (the server page and the browser's search box both use it).
 
+/** What says how the page shows results rather than which: its exports leave these out. */
+export const PRESENTATION_PARAMS = ["scope", "page", "perPage", "view", "stack"] as const;
+
 export type RawParams = Record<string, string | string[] | undefined>;
 
 /** Next's searchParams object → URLSearchParams, repeated keys kept. */
@@ -61,3 +64,11 @@ export function facetParam(facet: string): string | null {
 /** What a decade bar sets: the years from and to, in place of decade/century filters. */
 export const decadeHref = (params: URLSearchParams, start: number, width: number) =>
   withParams(params, { from: String(start), to: String(start + width - 1), decade: null, century: null });
+
+/** The same search as CSV or as a printable list: every filter, but not the page, the view or the chart. */
+export function exportHref(params: URLSearchParams, as: "csv" | "print"): string {
+  const kept = new URLSearchParams(params);
+  for (const key of [...PRESENTATION_PARAMS, "limit"]) kept.delete(key);
+  const qs = kept.toString();
+  return `${as === "csv" ? "/api/search/export.csv" : "/search/print"}${qs ? `?${qs}` : ""}`;
+}

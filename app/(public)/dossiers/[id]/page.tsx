@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { ItemCard, itemLabel } from "@/components/dossiers/item-card";
+import { CitedItemCard, itemLabel } from "@/components/exports/cited-item-card";
 import { DossierOwnerActions } from "@/components/dossiers/dossier-owner-actions";
 import { DossierSharing } from "@/components/dossiers/dossier-sharing";
 import { ItemControls } from "@/components/dossiers/item-controls";
@@ -9,7 +9,7 @@ import { OrderedItems, type OrderEntry } from "@/components/dossiers/ordered-ite
 import { EmptyState } from "@/components/ui/empty-state";
 import { Notice } from "@/components/ui/notice";
 import { appUrl } from "@/lib/config";
-import { accessedOn } from "@/lib/dossiers/citation";
+import { accessedOn } from "@/lib/exports/citation";
 import { lightTableHref, MAX_REGIONS } from "@/lib/light-table/links";
 import { dossierCsvPath, dossierPrintPath, VISIBILITY_LABELS, type DossierItemView, type WithheldItem } from "@/lib/dossiers/types";
 import { loadDossier } from "./load";
@@ -88,7 +88,7 @@ export default async function DossierPage({ params }: Props) {
             <OrderedItems dossierId={dossier.id} entries={order} editable={mine && !dossier.deletedAt}>
               {entries.map((e) =>
                 e.item ? (
-                  <ItemCard
+                  <CitedItemCard
                     key={e.id}
                     item={e.item}
                     baseUrl={baseUrl}

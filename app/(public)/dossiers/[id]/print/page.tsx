@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { ItemCard } from "@/components/dossiers/item-card";
-import { PrintButton } from "@/components/dossiers/print-button";
+import { CitedItemCard } from "@/components/exports/cited-item-card";
+import { PrintButton } from "@/components/exports/print-button";
 import { appUrl } from "@/lib/config";
-import { accessedOn } from "@/lib/dossiers/citation";
+import { accessedOn } from "@/lib/exports/citation";
 import { dossierPath } from "@/lib/dossiers/types";
 import { loadDossier } from "../load";
 
@@ -41,7 +41,7 @@ export default async function DossierPrintPage({ params }: Props) {
         {dossier.items.map((item, n) => (
           <li key={item.id} className="break-inside-avoid border-b border-rule pb-4 print:mb-4">
             <p className="mb-1 font-mono text-xs text-ink-faint">{n + 1}</p>
-            <ItemCard item={item} baseUrl={appUrl()} accessed={accessed} size={600} />
+            <CitedItemCard item={item} baseUrl={appUrl()} accessed={accessed} size={600} />
           </li>
         ))}
       </ol>

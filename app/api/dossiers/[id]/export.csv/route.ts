@@ -2,13 +2,13 @@
 // with its suggested citation accessed today. Whoever may read the dossier may export it.
 import { route } from "@/lib/api/handler";
 import { appUrl } from "@/lib/config";
-import { csvFileName, dossierCsv } from "@/lib/dossiers/csv";
+import { csvFileName, evidenceCsv } from "@/lib/exports/csv";
 import { getDossier } from "@/lib/dossiers/queries";
 import { dossierIdSchema } from "@/lib/dossiers/schemas";
 
 export const GET = route<{ id: string }>("export.visible", async ({ actor, params }) => {
   const dossier = await getDossier(actor, dossierIdSchema.parse(params.id));
-  const csv = dossierCsv(dossier, { baseUrl: appUrl(), accessed: new Date() });
+  const csv = evidenceCsv(dossier.items, { baseUrl: appUrl(), accessed: new Date() });
   return new Response(csv, {
     headers: {
       // RFC 4180 §3: text/csv with the optional header parameter.

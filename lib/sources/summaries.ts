@@ -1,19 +1,20 @@
 import "server-only";
-import { sourceCaptionColumns } from "@/lib/sources/queries";
 import { and, asc, eq, inArray, isNull } from "drizzle-orm";
 import type { Executor } from "@/db/client";
 import { collections, images, places, sources } from "@/db/schema";
 import type { Actor } from "@/lib/auth/policy";
 import { countryName } from "@/lib/catalogue/countries";
+import type { SourceSummary } from "@/lib/exports/cited-items";
 import { placeLine } from "@/lib/places/format";
-import { visibleSources } from "@/lib/sources/visibility";
-import type { DossierSourceSummary } from "./types";
+import { sourceCaptionColumns } from "./queries";
+import { visibleSources } from "./visibility";
 
 /**
  * The caption facts of the given sources, only of those the caller may see (visibleSources inside the
- * query), with each one's first processed photograph for a thumbnail.
+ * query), with each one's first processed photograph for a thumbnail: what dossiers and search exports
+ * cite and caption, one query for any number of sources.
  */
-export async function sourceSummaries(tx: Executor, actor: Actor | null, ids: number[]): Promise<Map<number, DossierSourceSummary>> {
+export async function sourceSummaries(tx: Executor, actor: Actor | null, ids: number[]): Promise<Map<number, SourceSummary>> {
   if (ids.length === 0) return new Map();
   const rows = await tx
     .select({

@@ -1,4 +1,5 @@
-// A suggested citation for each item of a dossier. Pure: the server, the print page and the tests share it.
+// A suggested citation for each item of a dossier or a search export. Pure: the CSV exports, the print
+// pages and the tests share it.
 //
 // Style: in the manner of the Chicago Manual of Style's notes for works of art (from memory, common
 // practice): artist, title (in italics), date, medium, holding collection and its city, then how the
@@ -8,11 +9,12 @@
 // The access date is written as YYYY-MM-DD (ISO 8601) so that it reads the same in every language.
 import { readDating } from "@/lib/dating";
 import { attributionInWords } from "@/lib/sources/vocab";
-import type { DossierSourceSummary } from "./types";
+import type { CitedRegion, SourceSummary } from "./cited-items";
 
-export type CitedItem =
-  | { kind: "source"; source: DossierSourceSummary }
-  | { kind: "region"; source: DossierSourceSummary; region: { id: number; imageId: number; label: string | null } };
+/** What a citation reads of an item (a CitedItem has all of it). */
+export type Citable =
+  | { kind: "source"; source: SourceSummary }
+  | { kind: "region"; source: SourceSummary; region: Pick<CitedRegion, "id" | "imageId" | "label"> };
 
 export type Citation = {
   /** The whole citation as plain text (for CSV and copying). */
@@ -26,7 +28,7 @@ export type Citation = {
 };
 
 /** The permanent address of an item in Cordarium: a source page, or the viewer opened on the region. */
-export function permalink(item: CitedItem, baseUrl: string): string {
+export function permalink(item: Citable, baseUrl: string): string {
   const base = baseUrl.replace(/\/+$/, "");
   if (item.kind === "source") return `${base}/sources/${item.source.id}`;
   return `${base}/sources/${item.source.id}/images/${item.region.imageId}?region=${item.region.id}`;
@@ -49,14 +51,14 @@ export function dateInWords(edtf: string | null): string | null {
 }
 
 /** "Attributed to Maria Rossi"; null when no artist is recorded (the citation then starts with the title). */
-export function attributionOf(source: Pick<DossierSourceSummary, "artist" | "attributionQualifier">): string | null {
+export function attributionOf(source: Pick<SourceSummary, "artist" | "attributionQualifier">): string | null {
   if (!source.artist && source.attributionQualifier !== "anonymous") return null;
   return attributionInWords(source.attributionQualifier, source.artist);
 }
 
 const clean = (s: string | null | undefined) => (s ?? "").replace(/\s+/g, " ").trim();
 
-export function citeItem(item: CitedItem, opts: { baseUrl: string; accessed: Date | string }): Citation {
+export function citeItem(item: Citable, opts: { baseUrl: string; accessed: Date | string }): Citation {
   const s = item.source;
   const url = permalink(item, opts.baseUrl);
   const accessed = accessedOn(opts.accessed);

@@ -1,15 +1,18 @@
-// Suggested citations of dossier items, in the manner of the Chicago Manual of Style's notes for works
+// Suggested citations of dossier items and search results, in the manner of the Chicago Manual of Style's notes for works
 // of art (from memory, common practice: artist, italic title, date, medium, collection, city, then the
-// online copy with the access date before the URL), and the CSV export against RFC 4180 §2.
+// online copy with the access date before the URL), and the CSV records both exports share, against
+// RFC 4180 §2.
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
-import { accessedOn, citeItem, permalink } from "@/lib/dossiers/citation";
-import { CSV_COLUMNS, csvFileName, dossierCsv } from "@/lib/dossiers/csv";
-import type { DossierItemView, DossierSourceSummary } from "@/lib/dossiers/types";
+import type { DossierItemView } from "@/lib/dossiers/types";
+import { accessedOn, citeItem, permalink } from "@/lib/exports/citation";
+import type { SourceSummary } from "@/lib/exports/cited-items";
+import { CSV_COLUMNS, csvFileName, csvRecord, evidenceCsv } from "@/lib/exports/csv";
+import { searchCsvFileName } from "@/lib/search/page/words";
 import type { RegionView } from "@/lib/regions/types";
 
 const BASE = "https://archive.example/";
-const source: DossierSourceSummary = {
+const source: SourceSummary = {
   id: 12,
   title: "Lute Player by a Window",
   objectType: "painting",
@@ -117,7 +120,7 @@ describe("CSV export (RFC 4180 §2)", () => {
     },
     { id: 2, kind: "source", position: 1, note: "=SUM(A1:A2)", version: 1, source: { ...source, id: 13, title: "Plain title" } },
   ];
-  const csv = dossierCsv({ items }, { baseUrl: BASE, accessed: "2031-02-03" });
+  const csv = evidenceCsv(items, { baseUrl: BASE, accessed: "2031-02-03" });
 
   it("ends each record with CRLF and starts with a header naming every column (§2.1, §2.3)", () => {
     expect(csv.split("\r\n")[0]).toBe(CSV_COLUMNS.join(","));
@@ -148,5 +151,48 @@ describe("CSV export (RFC 4180 §2)", () => {
   it("names the file after the title in plain ASCII", () => {
     expect(csvFileName("Lauten-Hände in Köln, 1650?", 4)).toBe("lauten-hande-in-koln-1650.csv");
     expect(csvFileName("???", 4)).toBe("dossier-4.csv");
+  });
+});
+
+describe("one record builder for dossiers and searches", () => {
+  const strumming = { id: 1, aspectId: 1, aspectKey: "right_hand_technique", aspectLabel: "Right-hand technique", kind: "terms" as const, termId: 2, termKey: "strumming", termLabel: "strumming", count: null, text: null, confidence: "probable" as const, note: "thumb leads" };
+  const opts = { baseUrl: BASE, accessed: "2031-02-03" };
+  const column = (record: (string | number)[], name: (typeof CSV_COLUMNS)[number]) => record[CSV_COLUMNS.indexOf(name)];
+
+  it("writes a search hit (a region, no note) with the same columns and citation as the same region in a dossier", () => {
+    const shown = regionView({ observations: [strumming] });
+    const fromSearch = csvRecord({ kind: "region", source, region: shown }, 1, opts);
+    const dossierItem: DossierItemView = { id: 5, kind: "region", position: 0, note: "my note", version: 1, source, region: shown };
+    const fromDossier = csvRecord(dossierItem, 1, opts);
+    expect(fromSearch).toHaveLength(CSV_COLUMNS.length);
+    expect(fromDossier).toHaveLength(CSV_COLUMNS.length);
+    CSV_COLUMNS.forEach((name, i) => {
+      if (name !== "note") expect(fromSearch[i], name).toEqual(fromDossier[i]);
+    });
+    expect(column(fromSearch, "note")).toBe("");
+    expect(column(fromDossier, "note")).toBe("my note");
+    expect(column(fromSearch, "observations")).toBe("Right-hand technique: strumming (probable) — thumb leads");
+    expect(column(fromSearch, "collection")).toBe("Museo Immaginario, Bologna");
+    expect(column(fromSearch, "citation")).toBe(
+      "Attributed to Maria Invented, Lute Player by a Window, about 1650, Oil on panel, Museo Immaginario, Bologna, accession no. MI 204, detail, region 34 (“Right hand”), Cordarium, accessed 2031-02-03, https://archive.example/sources/12/images/9?region=34.",
+    );
+  });
+
+  it("says the review state of the version exported, so proposed work never passes for vetted; a source has none", () => {
+    expect(column(csvRecord({ kind: "region", source, region: regionView({ state: "proposed", shown: "working" }) }, 2, opts), "review_state")).toBe("proposed");
+    expect(column(csvRecord({ kind: "region", source, region: regionView({}) }, 2, opts), "review_state")).toBe("vetted");
+    expect(column(csvRecord({ kind: "source", source }, 2, opts), "review_state")).toBe("");
+  });
+
+  it("numbers the records from 1 in the order given (a search's order)", () => {
+    const csv = evidenceCsv([regionView({ id: 8 }), regionView({ id: 3 }), regionView({ id: 5 })].map((region) => ({ kind: "region" as const, source, region })), opts);
+    const rows = Papa.parse<Record<string, string>>(csv, { header: true, skipEmptyLines: true }).data;
+    expect(rows.map((r) => [r.position, r.region_id])).toEqual([["1", "8"], ["2", "3"], ["3", "5"]]);
+  });
+
+  it("names a search's file after its words and the day, or 'all'", () => {
+    expect(searchCsvFileName("Laute, Köln", "2031-02-03")).toBe("search-laute-koln-2031-02-03.csv");
+    expect(searchCsvFileName("", "2031-02-03")).toBe("search-all-2031-02-03.csv");
+    expect(searchCsvFileName("«»", "2031-02-03")).toBe("search-all-2031-02-03.csv");
   });
 });

@@ -1,25 +1,22 @@
-// One item of a dossier as the page and the print page show it: the crop of a region (from the IIIF
-// image service) or the source's first photograph, its caption, the owner's note and a suggested citation.
+// One item as a dossier page and the print pages (of a dossier, of a search) show it: the crop of a region
+// (from the IIIF image service) or the source's first photograph, its caption, the owner's note if any,
+// and a suggested citation.
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { iiifBase, thumbnailUrl } from "@/components/images/image-types";
 import { AddToLightTable } from "@/components/light-table/add-to-light-table";
-import { citeItem, type CitedItem } from "@/lib/dossiers/citation";
-import type { DossierItemView } from "@/lib/dossiers/types";
+import { citeItem } from "@/lib/exports/citation";
+import type { CitedItem } from "@/lib/exports/cited-items";
 import { regionUrl } from "@/lib/iiif/fragments";
 import { observationSentence, STATE_WORDS } from "@/lib/regions/types";
 import { OBJECT_TYPE_LABELS } from "@/lib/sources/vocab";
 
-export function cited(item: DossierItemView): CitedItem {
-  return item.kind === "region" ? { kind: "region", source: item.source, region: item.region } : { kind: "source", source: item.source };
-}
-
 /** How the item is named in controls: "region 34 of “Lute Player”". */
-export function itemLabel(item: DossierItemView): string {
+export function itemLabel(item: CitedItem): string {
   return item.kind === "region" ? `region ${item.region.id}${item.region.label ? ` “${item.region.label}”` : ""} of “${item.source.title}”` : `“${item.source.title}”`;
 }
 
-function Picture({ item, size }: { item: DossierItemView; size: number }) {
+function Picture({ item, size }: { item: CitedItem; size: number }) {
   const href = item.kind === "region" ? `/sources/${item.source.id}/images/${item.region.imageId}?region=${item.region.id}` : `/sources/${item.source.id}`;
   const src =
     item.kind === "region"
@@ -36,18 +33,18 @@ function Picture({ item, size }: { item: DossierItemView; size: number }) {
 }
 
 type CardProps = {
-  item: DossierItemView;
+  item: CitedItem;
   baseUrl: string;
   accessed: string;
   size?: number;
   controls?: ReactNode;
-  /** Offer "Add to light table" on a region (the page; not the print page). */
+  /** Offer "Add to light table" on a region (the dossier page; not on paper). */
   gather?: boolean;
 };
 
-export function ItemCard({ item, baseUrl, accessed, size = 400, controls, gather = false }: CardProps) {
+export function CitedItemCard({ item, baseUrl, accessed, size = 400, controls, gather = false }: CardProps) {
   const s = item.source;
-  const citation = citeItem(cited(item), { baseUrl, accessed });
+  const citation = citeItem(item, { baseUrl, accessed });
   const region = item.kind === "region" ? item.region : null;
   return (
     <article className="flex flex-col gap-4 sm:flex-row print:flex-row">
