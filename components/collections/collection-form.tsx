@@ -1,15 +1,13 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
-import { useForm, type Resolver } from "react-hook-form";
-import { ConflictPanel, type Comparison } from "@/components/forms/conflict-panel";
+import { ConflictPanel } from "@/components/forms/conflict-panel";
 import { FormField, inputProps } from "@/components/forms/form-field";
-import { Button } from "@/components/ui/button";
+import { SaveButtons } from "@/components/forms/save-buttons";
+import { useVersionedForm } from "@/components/forms/use-versioned-form";
 import { Notice } from "@/components/ui/notice";
-import { api, ApiError } from "@/lib/client/api";
-import { collectionFieldsSchema, type CollectionFields } from "@/lib/collections/schemas";
+import { api } from "@/lib/client/api";
+import { collectionFieldsSchema } from "@/lib/collections/schemas";
 
 type Values = { name: string; city: string; countryCode: string; url: string; notes: string };
 type Stored = { id: number; version: number; name: string; city: string | null; countryCode: string | null; url: string | null; notes: string | null };
@@ -19,54 +17,26 @@ const toValues = (c?: Partial<Stored>): Values => ({ name: c?.name ?? "", city: 
 
 export function CollectionForm({ countries, existing }: { countries: { code: string; name: string }[]; existing?: Stored }) {
   const router = useRouter();
-  const [version, setVersion] = useState(existing?.version ?? 0);
-  const [refusal, setRefusal] = useState<string | null>(null);
-  const [conflict, setConflict] = useState<{ theirs: Stored; rows: Comparison } | null>(null);
-  const { register, handleSubmit, setError, getValues, formState } = useForm<Values, unknown, CollectionFields>({
-    resolver: zodResolver(collectionFieldsSchema) as unknown as Resolver<Values, unknown, CollectionFields>,
-    defaultValues: toValues(existing),
-    mode: "onTouched",
-  });
-  const e = formState.errors;
-
-  async function save(fields: CollectionFields, asVersion = version) {
-    setRefusal(null);
-    try {
+  const { form, submit, refusal, conflict } = useVersionedForm({
+    schema: collectionFieldsSchema,
+    stored: existing,
+    toValues,
+    labels: LABELS,
+    reloadForTheirs: true,
+    async send(fields, version) {
       const res = existing
-        ? await api<{ collection: Stored }>(`/api/collections/${existing.id}`, { method: "PATCH", body: { ...fields, version: asVersion } })
+        ? await api<{ collection: Stored }>(`/api/collections/${existing.id}`, { method: "PATCH", body: { ...fields, version } })
         : await api<{ collection: Stored }>("/api/collections", { body: fields });
       router.push(`/collections/${res.collection.id}`);
       router.refresh();
-    } catch (error) {
-      if (!(error instanceof ApiError)) return setRefusal("The server could not be reached. Nothing was saved.");
-      if (error.status === 409 && error.body.current) {
-        const theirs = error.body.current as Stored;
-        const stored = toValues(theirs);
-        const mine = getValues();
-        const rows = (Object.keys(stored) as (keyof Values)[])
-          .filter((k) => stored[k] !== mine[k])
-          .map((k) => ({ field: k, label: LABELS[k], theirs: stored[k], yours: mine[k] }));
-        return setConflict({ theirs, rows });
-      }
-      for (const [field, messages] of Object.entries(error.fields)) setError(field as keyof Values, { message: messages.join(" ") });
-      setRefusal(`${error.message} Nothing was saved; your entries are still here.`);
-    }
-  }
+    },
+  });
+  const { register, formState } = form;
+  const e = formState.errors;
 
   return (
-    <form onSubmit={handleSubmit((f) => save(f))} noValidate className="grid max-w-2xl gap-4">
-      {conflict && (
-        <ConflictPanel
-          what="collection"
-          rows={conflict.rows}
-          onLoadTheirs={() => window.location.reload()}
-          onKeepMine={() => {
-            setVersion(conflict.theirs.version);
-            setConflict(null);
-            void handleSubmit((f) => save(f, conflict.theirs.version))();
-          }}
-        />
-      )}
+    <form onSubmit={submit} noValidate className="grid max-w-2xl gap-4">
+      {conflict && <ConflictPanel what="collection" {...conflict} />}
       {refusal && <Notice tone="warn">{refusal}</Notice>}
       <FormField label="Name" error={e.name?.message}>
         <input {...inputProps(e.name)} {...register("name")} />
@@ -92,11 +62,7 @@ export function CollectionForm({ countries, existing }: { countries: { code: str
       <FormField label="Notes" hint="Access, photography policy, what the collection is strong in." error={e.notes?.message}>
         <textarea rows={4} {...inputProps(e.notes)} {...register("notes")} />
       </FormField>
-      <div>
-        <Button type="submit" disabled={formState.isSubmitting}>
-          {formState.isSubmitting ? "Saving…" : existing ? "Save changes" : "Add the collection"}
-        </Button>
-      </div>
+      <SaveButtons label={existing ? "Save changes" : "Add the collection"} busy={formState.isSubmitting} />
     </form>
   );
 }

@@ -4,6 +4,7 @@
 // values stay; a stale edit shows what is stored now and offers to reload it. Nothing is overwritten.
 import { useRouter } from "next/navigation";
 import { useId, useState, type FormEvent } from "react";
+import { SaveButtons } from "@/components/forms/save-buttons";
 import { Button } from "@/components/ui/button";
 import { inputClass, SelectField, TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -115,16 +116,7 @@ export function AreaForm({ area, onSaved, onCancel }: { area?: PlaceRecord; onSa
         />
         {fields.description?.length ? <p className="text-sm text-warn">{fields.description.join(" ")}</p> : null}
       </div>
-      <div className="flex flex-wrap gap-2 sm:col-span-2">
-        <Button type="submit" disabled={busy}>
-          {busy ? "Saving…" : base ? "Save changes" : "Add area"}
-        </Button>
-        {onCancel && (
-          <Button type="button" variant="quiet" onClick={onCancel}>
-            Cancel
-          </Button>
-        )}
-      </div>
+      <SaveButtons label={base ? "Save changes" : "Add area"} busy={busy} onCancel={onCancel} className="flex flex-wrap gap-2 sm:col-span-2" />
       <div className="sm:col-span-2" aria-live="polite">
         {conflict ? (
           <AreaConflict current={conflict} onReload={() => reload(conflict)} />

@@ -1,16 +1,15 @@
 "use client";
 
 // Adds a term to an aspect's list, or rewords one with the version it was opened at.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
-import { useForm, type Resolver } from "react-hook-form";
-import { ConflictPanel, type Comparison } from "@/components/forms/conflict-panel";
+import { ConflictPanel } from "@/components/forms/conflict-panel";
 import { FormField, inputProps } from "@/components/forms/form-field";
-import { Button } from "@/components/ui/button";
+import { SaveButtons } from "@/components/forms/save-buttons";
+import { useVersionedForm } from "@/components/forms/use-versioned-form";
 import { Notice } from "@/components/ui/notice";
-import { api, ApiError } from "@/lib/client/api";
-import { keyFromLabel, termCreateSchema, termFieldsSchema, type TermCreate } from "@/lib/vocabulary/schemas";
+import { api } from "@/lib/client/api";
+import { keyFromLabel, termCreateSchema, termFieldsSchema } from "@/lib/vocabulary/schemas";
 import type { TermView } from "@/lib/vocabulary/types";
 
 type Values = { key: string; label: string; description: string };
@@ -19,51 +18,34 @@ const toValues = (t?: TermView): Values => ({ key: t?.key ?? "", label: t?.label
 
 export function TermForm({ aspect, term, onDone }: { aspect: { id: number; label: string }; term?: TermView; onDone?: () => void }) {
   const router = useRouter();
-  const [version, setVersion] = useState(term?.version ?? 0);
-  const [refusal, setRefusal] = useState<string | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
-  const [conflict, setConflict] = useState<{ theirs: TermView; rows: Comparison } | null>(null);
   const keyTyped = useRef(false);
-  const { register, handleSubmit, setError, getValues, setValue, reset, formState } = useForm<Values, unknown, TermCreate>({
-    resolver: zodResolver(term ? termFieldsSchema : termCreateSchema) as unknown as Resolver<Values, unknown, TermCreate>,
-    defaultValues: toValues(term),
-    mode: "onTouched",
-  });
-  const e = formState.errors;
-
-  async function save(fields: TermCreate, asVersion = version) {
-    setRefusal(null);
-    setSaved(null);
-    try {
+  const { form, submit, refusal, conflict } = useVersionedForm({
+    schema: term ? termFieldsSchema : termCreateSchema,
+    stored: term,
+    toValues,
+    labels: LABELS,
+    compared: ["label", "description"],
+    async send(fields, version) {
+      setSaved(null);
+      let next: number | undefined;
       if (term) {
-        const body = { label: fields.label, description: fields.description, version: asVersion };
+        const body = { label: fields.label, description: fields.description, version };
         const res = await api<{ term: TermView }>(`/api/vocabulary/terms/${term.id}`, { method: "PATCH", body });
-        setVersion(res.term.version);
+        next = res.term.version;
         onDone?.();
       } else {
         const res = await api<{ term: TermView }>(`/api/vocabulary/aspects/${aspect.id}/terms`, { body: fields });
-        reset(toValues());
+        form.reset(toValues());
         keyTyped.current = false;
         setSaved(`Added ${res.term.label} to ${aspect.label}.`);
       }
       router.refresh();
-    } catch (error) {
-      if (!(error instanceof ApiError)) return setRefusal("The server could not be reached. Nothing was saved.");
-      if (error.status === 409 && error.body.current) {
-        const theirs = error.body.current as TermView;
-        const stored = toValues(theirs);
-        const mine = getValues();
-        const rows = (["label", "description"] as const)
-          .filter((k) => stored[k] !== mine[k])
-          .map((k) => ({ field: k, label: LABELS[k], theirs: stored[k], yours: mine[k] }));
-        return setConflict({ theirs, rows });
-      }
-      for (const [field, messages] of Object.entries(error.fields)) {
-        if (field in LABELS) setError(field as keyof Values, { message: messages.join(" ") });
-      }
-      setRefusal(`${error.message} Nothing was saved; your entries are still here.`);
-    }
-  }
+      return next;
+    },
+  });
+  const { register, setValue, formState } = form;
+  const e = formState.errors;
 
   // Until the editor types a key of their own, it follows the label.
   const labelField = register("label", {
@@ -75,24 +57,10 @@ export function TermForm({ aspect, term, onDone }: { aspect: { id: number; label
   const name = term ? `Edit term ${term.label}` : `Add a term to ${aspect.label}`;
 
   return (
-    <form onSubmit={handleSubmit((f) => save(f))} noValidate aria-label={name} className="grid gap-3 sm:grid-cols-2">
+    <form onSubmit={submit} noValidate aria-label={name} className="grid gap-3 sm:grid-cols-2">
       {conflict && (
         <div className="sm:col-span-2">
-          <ConflictPanel
-            what="term"
-            rows={conflict.rows}
-            onLoadTheirs={() => {
-              reset(toValues(conflict.theirs));
-              setVersion(conflict.theirs.version);
-              setConflict(null);
-              router.refresh();
-            }}
-            onKeepMine={() => {
-              setVersion(conflict.theirs.version);
-              setConflict(null);
-              void handleSubmit((f) => save(f, conflict.theirs.version))();
-            }}
-          />
+          <ConflictPanel what="term" {...conflict} />
         </div>
       )}
       <FormField label="Label" error={e.label?.message}>
@@ -110,16 +78,7 @@ export function TermForm({ aspect, term, onDone }: { aspect: { id: number; label
       <FormField label="Description" className="sm:col-span-2" error={e.description?.message}>
         <input {...inputProps(e.description)} {...register("description")} />
       </FormField>
-      <div className="flex flex-wrap gap-2 sm:col-span-2">
-        <Button type="submit" disabled={formState.isSubmitting}>
-          {formState.isSubmitting ? "Saving…" : term ? "Save term" : "Add term"}
-        </Button>
-        {onDone && (
-          <Button type="button" variant="quiet" onClick={onDone}>
-            Cancel
-          </Button>
-        )}
-      </div>
+      <SaveButtons label={term ? "Save term" : "Add term"} busy={formState.isSubmitting} onCancel={onDone} className="flex flex-wrap gap-2 sm:col-span-2" />
       <div className="sm:col-span-2" aria-live="polite">
         {refusal && <Notice tone="warn">{refusal}</Notice>}
         {saved && <Notice tone="ok">{saved}</Notice>}
