@@ -12,7 +12,8 @@ import { collectionFieldsSchema } from "@/lib/collections/schemas";
 type Values = { name: string; city: string; countryCode: string; url: string; notes: string };
 type Stored = { id: number; version: number; name: string; city: string | null; countryCode: string | null; url: string | null; notes: string | null };
 
-const LABELS: Record<keyof Values, string> = { name: "name", city: "city", countryCode: "country", url: "web address", notes: "notes" };
+// The comparison's row names are the fields' own labels.
+const LABELS: Record<keyof Values, string> = { name: "Name", city: "City", countryCode: "Country", url: "Web address", notes: "Notes" };
 const toValues = (c?: Partial<Stored>): Values => ({ name: c?.name ?? "", city: c?.city ?? "", countryCode: c?.countryCode ?? "", url: c?.url ?? "", notes: c?.notes ?? "" });
 
 export function CollectionForm({ countries, existing }: { countries: { code: string; name: string }[]; existing?: Stored }) {
@@ -22,6 +23,8 @@ export function CollectionForm({ countries, existing }: { countries: { code: str
     stored: existing,
     toValues,
     labels: LABELS,
+    // A country reads by its name, as the list shows it.
+    shown: (field, values) => (field === "countryCode" ? (countries.find((c) => c.code === values.countryCode)?.name ?? values.countryCode) : values[field]),
     reloadForTheirs: true,
     async send(fields, version) {
       const res = existing

@@ -13,7 +13,7 @@ import { dossierFieldsSchema } from "@/lib/dossiers/schemas";
 
 type Values = { title: string; description: string };
 type Stored = { id: number; version: number; title: string; description: string | null };
-const LABELS: Record<keyof Values, string> = { title: "title", description: "description" };
+const LABELS: Record<keyof Values, string> = { title: "Title", description: "Description" };
 const toValues = (d?: Partial<Stored>): Values => ({ title: d?.title ?? "", description: d?.description ?? "" });
 
 export function DossierForm({ existing, onDone }: { existing?: Stored; onDone?: () => void }) {
@@ -24,7 +24,6 @@ export function DossierForm({ existing, onDone }: { existing?: Stored; onDone?: 
     toValues,
     labels: LABELS,
     // Stored text comes back trimmed; spaces alone are no difference worth showing.
-    same: (theirs, yours) => theirs.trim() === yours.trim(),
     reloadForTheirs: true,
     async send(fields, version) {
       if (existing) {

@@ -21,7 +21,7 @@ type Options<V extends Record<string, string>, S extends { version: number }, O>
   labels: Record<keyof V, string>;
   /** The fields an edit can change, in the comparison's order; all labelled fields by default. */
   compared?: readonly (keyof V)[];
-  /** Whether a stored and a typed value count as the same; equal text by default. */
+  /** Whether a stored and a typed value count as the same; by default equal text once trimmed (the server trims). */
   same?: (theirs: string, yours: string) => boolean;
   /** How a value reads in the comparison, e.g. a code's label. */
   shown?: (field: keyof V, values: V) => string;
@@ -47,7 +47,7 @@ export function useVersionedForm<V extends Record<string, string>, S extends { v
   function compare(theirs: S): Comparison {
     const stored = toValues(theirs);
     const mine = form.getValues();
-    const same = options.same ?? ((a: string, b: string) => a === b);
+    const same = options.same ?? ((a: string, b: string) => a.trim() === b.trim());
     const shown = options.shown ?? ((field: keyof V, values: V) => values[field]);
     return (options.compared ?? (Object.keys(labels) as (keyof V)[]))
       .filter((k) => !same(stored[k], mine[k]))

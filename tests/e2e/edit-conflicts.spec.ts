@@ -146,14 +146,16 @@ test("collection: a contributor's stale edit is refused and shown; saving mine o
   await page.getByLabel("Notes").fill("Photography without flash.");
 
   // An editor (who may edit any collection) saves first.
-  await patch(editor, `/api/collections/${collection.id}`, { ...fields, notes: "Closed for restoration.", version: collection.version });
+  await patch(editor, `/api/collections/${collection.id}`, { ...fields, countryCode: "FR", notes: "Closed for restoration.", version: collection.version });
 
   await page.getByRole("button", { name: "Save changes" }).click();
   const conflict = new ConflictPanel(page.getByRole("main"), "collection");
   await conflict.expectShown();
-  await conflict.expectFields(["web address", "notes"]);
-  await conflict.expectRow("web address", "—", "https://corde.example/visit");
-  await conflict.expectRow("notes", "Closed for restoration.", "Photography without flash.");
+  await conflict.expectFields(["Country", "Web address", "Notes"]);
+  // A country reads by its name (ISO 3166-1: FR France, IT Italy), as the form's list shows it.
+  await conflict.expectRow("Country", "France", "Italy");
+  await conflict.expectRow("Web address", "—", "https://corde.example/visit");
+  await conflict.expectRow("Notes", "Closed for restoration.", "Photography without flash.");
   expect(await storedCollection(contributor, collection.id)).toMatchObject({ notes: "Closed for restoration.", url: null, version: collection.version + 1 });
 
   await conflict.saveMine();
@@ -211,9 +213,9 @@ test("dossier: the owner's second window saved first; loading their version show
   await page.getByRole("button", { name: "Save title and description" }).click();
   const conflict = new ConflictPanel(page.getByRole("main"), "dossier");
   await conflict.expectShown();
-  await conflict.expectFields(["title", "description"]);
-  await conflict.expectRow("title", theirTitle, started.title);
-  await conflict.expectRow("description", "Sources gathered for the lesson.", "Right hand only.");
+  await conflict.expectFields(["Title", "Description"]);
+  await conflict.expectRow("Title", theirTitle, started.title);
+  await conflict.expectRow("Description", "Sources gathered for the lesson.", "Right hand only.");
   await expect(page.getByLabel("Description")).toHaveValue("Right hand only.");
   expect(await storedDossier(owner, dossier.id)).toMatchObject({ title: theirTitle, description: "Sources gathered for the lesson.", version: dossier.version + 1 });
 
