@@ -4,7 +4,7 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { getCoreRowModel, useReactTable, type ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
-import { useMemo } from "react";
+import { useEffect, useMemo, useRef } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { ServerTable } from "@/components/ui/server-table";
@@ -39,8 +39,14 @@ export function SourcesTable({ options }: { options: FilterOptions }) {
   const dir = params.get("dir") ?? "asc";
 
   // The address holds the whole view (filters, sort, page), so it can be shared and bookmarked.
+  // A change builds on the address last asked for, not on the one shown: until a replace lands, the
+  // shown one lacks it, and a second change made meanwhile (a country, then a year) would drop the first.
+  const asked = useRef<string | null>(null);
+  useEffect(() => {
+    if (asked.current === params.toString()) asked.current = null;
+  }, [params]);
   const setParams = (patch: Record<string, string | null>, keepPage = false) => {
-    const next = new URLSearchParams(params.toString());
+    const next = new URLSearchParams(asked.current ?? params.toString());
     if (!keepPage) {
       next.delete("after");
       next.delete("before");
@@ -49,6 +55,7 @@ export function SourcesTable({ options }: { options: FilterOptions }) {
       if (v === null || v === "") next.delete(k);
       else next.set(k, v);
     }
+    asked.current = next.toString();
     router.replace(`${pathname}${next.size ? `?${next}` : ""}`, { scroll: false });
   };
 
