@@ -16,6 +16,8 @@ export interface RankedHit {
   exact: number;
   bm25: number;
   ordinal: number;
+  /** The document's slot (slots.ts), for the filter and facet structures. */
+  slot: number;
   /** Sort keys, filled by rankHits for the sort rules in use. */
   keys?: SortKey[];
 }
@@ -99,7 +101,7 @@ export function rankHits(hits: RankedHit[], rules: string[], sort: SortSpec[], h
 }
 
 /** The k smallest items by `cmp`, sorted; a bounded max-heap keeps this O(n log k). */
-function topK<T>(items: T[], cmp: (a: T, b: T) => number, k: number): T[] {
+export function topK<T>(items: T[], cmp: (a: T, b: T) => number, k: number): T[] {
   if (k <= 0) return [];
   const heap: T[] = [];
   const down = (i: number) => {

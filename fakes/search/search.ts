@@ -2,9 +2,10 @@
 // matching, filtering, ranking, distinct, facets, pagination and formatting.
 
 import { bad, invalidType } from "./errors.js";
+import { countFacets } from "./facet-count.js";
 import { leafValuesAt, patternMatches, type Doc } from "./fields.js";
-import { matchesFilter } from "./filter.js";
-import { computeFacets, formatHit, resolveFacets, type FacetResult } from "./format.js";
+import { filterSlots } from "./filter-index.js";
+import { formatHit, resolveFacets, type FacetResult } from "./format.js";
 import { expandLastWord, matchQuery, planQuery, wordMatcher } from "./matching.js";
 import { rankHits, rankingScore, type RankedHit, type SortSpec } from "./ranking.js";
 import { filterablePatterns } from "./settings.js";
@@ -127,6 +128,10 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
   if (params.distinct && !filterablePatterns(settings).some((p) => patternMatches(p, params.distinct!)))
     throw bad("invalid_search_distinct", `Index \`${index.uid}\`: Attribute \`${params.distinct}\` is not filterable and thus, cannot be used as distinct attribute.`);
 
+  // Documents the filter lets through, from the columns (null: no filter).
+  const allowed = filter.type === "all" ? null : filterSlots(filter, index.columns);
+  const { slots } = index.columns;
+
   const plan = planQuery(q, settings, params.matchingStrategy ?? "last");
   const hasQuery = plan.positions.length > 0;
   let hits: RankedHit[];
@@ -147,16 +152,18 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
       fields,
       restrictTo,
       (id) => {
-        const doc = index.docs.get(id);
-        return doc && { doc, ordinal: index.ordinal(id) };
+        const slot = slots.slot(id);
+        return slot === undefined ? undefined : { doc: slots.doc(slot)!, ordinal: slots.ordinal(slot), slot };
       },
       expansions,
     );
-    if (filter.type !== "all") hits = hits.filter((h) => matchesFilter(filter, h.doc));
+    if (allowed) hits = hits.filter((h) => allowed.has(h.slot));
   } else {
     hits = [];
-    for (const [id, doc] of index.docs) {
-      if (filter.type === "all" || matchesFilter(filter, doc)) hits.push({ id, doc, words: 0, typos: 0, attribute: 0, exact: 0, bm25: 0, ordinal: index.ordinal(id) });
+    for (const slot of slots.ordered()) {
+      if (allowed && !allowed.has(slot)) continue;
+      const id = slots.id(slot)!;
+      hits.push({ id, doc: slots.doc(slot)!, words: 0, typos: 0, attribute: 0, exact: 0, bm25: 0, ordinal: slots.ordinal(slot), slot });
     }
   }
   const maxTotalHits = settings.pagination.maxTotalHits;
@@ -187,9 +194,9 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
 
   let facets: FacetResult | null = null;
   if (params.facets) {
-    const docs = matched.map((h) => h.doc);
-    const wanted = resolveFacets(index.uid, settings, params.facets, params.facets.includes("*") ? docs : []);
-    facets = computeFacets(settings, wanted, docs, params.facets.includes("*"));
+    const matchedSlots = Int32Array.from(matched, (h) => h.slot);
+    const wanted = resolveFacets(index.uid, settings, params.facets, params.facets.includes("*") ? index.columns.fieldPaths(matchedSlots) : []);
+    facets = countFacets(settings, wanted, matchedSlots, index.columns, params.facets.includes("*"));
   }
 
   const total = Math.min(matched.length, maxTotalHits);

@@ -1,0 +1,80 @@
+// The per-index companion of the document map for filters and facets: slot
+// numbers (slots.ts), one column per attribute a query has used (columns.ts)
+// and each document's field paths (what `facets: ["*"]` lists). Writes only
+// note the changed slots; the next query brings the columns up to date, or
+// drops them after a bulk load so they are rebuilt in one pass when next asked for.
+
+import { Column } from "./columns.js";
+import type { Doc } from "./fields.js";
+import { Shapes } from "./shapes.js";
+import { Slots } from "./slots.js";
+
+/** Above this share of changed documents, rebuilding a column is cheaper than patching it. */
+const REBUILD_RATIO = 0.3;
+/** Distinct field-path lists kept; beyond that (documents of many shapes) the cache starts over. */
+const MAX_SHAPES = 10_000;
+
+export class DocColumns {
+  readonly slots = new Slots();
+  private readonly columns = new Map<string, Column>();
+  private readonly pending = new Set<number>();
+  /** Slot → its document's field-path list in `shapes` (-1: not read yet). */
+  private shapeOf = new Int32Array(0);
+  private shapes = new Shapes();
+
+  put(id: string, doc: Doc): void {
+    const slot = this.slots.put(id, doc);
+    if (this.columns.size) this.pending.add(slot);
+    if (slot < this.shapeOf.length) this.shapeOf[slot] = -1;
+  }
+
+  remove(id: string): void {
+    const slot = this.slots.remove(id);
+    if (slot < 0) return;
+    if (this.columns.size) this.pending.add(slot);
+    this.shapeOf[slot] = -1;
+  }
+
+  /** The column of one attribute path, current with every write so far. */
+  column(path: string): Column {
+    this.sync();
+    let column = this.columns.get(path);
+    if (!column) {
+      column = new Column(path);
+      for (const slot of this.slots.ordered()) column.set(slot, this.slots.doc(slot));
+      this.columns.set(path, column);
+    }
+    return column;
+  }
+
+  private sync(): void {
+    if (this.pending.size === 0) return;
+    if (this.pending.size > this.slots.count * REBUILD_RATIO) this.columns.clear();
+    else for (const column of this.columns.values()) for (const slot of this.pending) column.set(slot, this.slots.doc(slot));
+    this.pending.clear();
+  }
+
+  /** Field paths of the given slots' documents, in first-seen order (as fieldPaths over each would give). */
+  fieldPaths(slots: ArrayLike<number>): Set<string> {
+    if (this.shapeOf.length < this.slots.capacity) {
+      const grown = new Int32Array(Math.max(this.slots.capacity, this.shapeOf.length * 2)).fill(-1);
+      grown.set(this.shapeOf);
+      this.shapeOf = grown;
+    }
+    if (this.shapes.lists.length > MAX_SHAPES) {
+      this.shapeOf.fill(-1);
+      this.shapes = new Shapes();
+    }
+    const out = new Set<string>();
+    const seen = new Set<number>();
+    for (let i = 0; i < slots.length; i++) {
+      const slot = slots[i]!;
+      let shape = this.shapeOf[slot]!;
+      if (shape < 0) shape = this.shapeOf[slot] = this.shapes.of(this.slots.doc(slot)!);
+      if (seen.has(shape)) continue;
+      seen.add(shape);
+      for (const p of this.shapes.lists[shape]!) out.add(p);
+    }
+    return out;
+  }
+}
