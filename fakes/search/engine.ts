@@ -59,6 +59,7 @@ export class SearchIndex {
     docs: this.docs,
     primaryKey: () => this.primaryKey ?? "id",
     fields: () => this.searchFields(),
+    ordinal: (id) => this.ordinal(id),
   });
   private statsCache: { fieldDistribution: Record<string, number>; bytes: number } | null = null;
 
