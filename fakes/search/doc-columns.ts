@@ -2,7 +2,9 @@
 // numbers (slots.ts), one column per attribute a query has used (columns.ts)
 // and each document's field paths (what `facets: ["*"]` lists). Writes only
 // note the changed slots; the next query brings the columns up to date, or
-// drops them after a bulk load so they are rebuilt in one pass when next asked for.
+// drops them after a bulk load so they are rebuilt in one pass. `warm()` does
+// that rebuilding when the server is idle, so the first search after a load
+// does not pay for it.
 
 import { Column } from "./columns.js";
 import type { Doc } from "./fields.js";
@@ -13,6 +15,8 @@ import { Slots } from "./slots.js";
 const REBUILD_RATIO = 0.3;
 /** Distinct field-path lists kept; beyond that (documents of many shapes) the cache starts over. */
 const MAX_SHAPES = 10_000;
+/** Documents whose field paths one background step reads. */
+const SHAPE_CHUNK = 10_000;
 
 export class DocColumns {
   readonly slots = new Slots();
@@ -21,6 +25,9 @@ export class DocColumns {
   /** Slot → its document's field-path list in `shapes` (-1: not read yet). */
   private shapeOf = new Int32Array(0);
   private shapes = new Shapes();
+  /** Attributes that had a column: `warm()` rebuilds them. */
+  private readonly used = new Set<string>();
+  private closed = false;
 
   put(id: string, doc: Doc): void {
     const slot = this.slots.put(id, doc);
@@ -43,8 +50,36 @@ export class DocColumns {
       column = new Column(path);
       for (const slot of this.slots.ordered()) column.set(slot, this.slots.doc(slot));
       this.columns.set(path, column);
+      this.used.add(path);
     }
     return column;
+  }
+
+  /**
+   * Reads missing field paths, then builds the columns of every attribute used so far or
+   * `filterable` among those paths, in the background: a piece per tick.
+   */
+  async warm(filterable: (path: string) => boolean): Promise<void> {
+    const tick = () => new Promise((r) => setImmediate(r));
+    for (let from = 0; ; from += SHAPE_CHUNK) {
+      if (this.closed) return;
+      const order = this.slots.ordered();
+      if (from >= order.length) break;
+      this.fieldPaths(order.subarray(from, from + SHAPE_CHUNK));
+      await tick();
+    }
+    const paths = new Set(this.used);
+    for (const path of this.fieldPaths(this.slots.ordered())) if (filterable(path)) paths.add(path);
+    for (const path of paths) {
+      if (this.closed) return;
+      this.column(path);
+      await tick();
+    }
+  }
+
+  /** Stops a background warm-up (used on shutdown). */
+  cancel(): void {
+    this.closed = true;
   }
 
   private sync(): void {

@@ -207,6 +207,12 @@ export class SearchIndex {
     return this.text.sync();
   }
 
+  /** Background catch-up after writes: the full-text index, then the filter and facet columns. */
+  async warm(): Promise<void> {
+    await this.text.warm();
+    await this.columns.warm((path) => filterablePatterns(this.settings).some((p) => patternMatches(p, path)));
+  }
+
   search(params: SearchParams): SearchResult {
     return runSearch(this, params);
   }
