@@ -19,17 +19,6 @@ export const HAS_VALUE = 1;
 export const HAS_NULL = 2;
 export const HAS_EMPTY = 4;
 
-export interface FacetGroup {
-  /** The facet key format.ts counts by. */
-  key: string;
-  /** The number, for numeric groups (they sort by it and feed facetStats). */
-  num: number | null;
-  /** The label of the first atom seen; `mixed` when other atoms of the group read differently ("Köln" / "köln"). */
-  label: string;
-  mixed: boolean;
-}
-
-const facetKey = (v: Leaf): string => (typeof v === "number" ? `n:${v}` : `s:${foldFacet(String(v))}`);
 export const facetLabel = (v: Leaf): string => (typeof v === "string" ? v.trim() : String(v));
 
 /** Scalar leaves under a raw value, in document order (as leafValuesAt flattens them). */
@@ -47,11 +36,20 @@ export class Column {
   readonly atoms: Leaf[] = [];
   /** Atom → its facet group. */
   readonly atomGroup: number[] = [];
-  private readonly groupIds = new Map<string, number>();
-  readonly groups: FacetGroup[] = [];
+  // Facet groups, as format.ts keys them: numbers by value (`n:${v}`: 0 and -0 share one), strings
+  // and booleans by folded text. Parallel arrays, as ids can give 100,000 groups of one document each.
+  private readonly numberGroups = new Map<number, number>();
+  private readonly textGroups = new Map<string, number>();
+  /** Group → its number (numeric groups sort by it and feed facetStats), or null. */
+  readonly groupNum: (number | null)[] = [];
+  /** Group → the label of its first atom (numbers: null, their label is String(num)). */
+  readonly groupText: (string | null)[] = [];
+  /** Groups whose atoms read differently ("Köln" / "köln"): the label shown is the first met in hit order. */
+  readonly mixed = new Set<number>();
   single = new Int32Array(0);
-  /** For MANY slots: the atoms in first-occurrence order, and their groups without repeats (what facets count). */
-  // Plain arrays: V8 keeps small integer arrays compact, where 100k small typed arrays weigh on the GC.
+  // For MANY slots: the atoms in first-occurrence order, and (only where two of them share a group)
+  // the groups without repeats, what facets count. Plain arrays: V8 keeps small integer arrays
+  // compact, where 100k small typed arrays weigh on the GC.
   readonly many: (number[] | undefined)[] = [];
   readonly manyGroups: (number[] | undefined)[] = [];
   private flags = new Uint8Array(0);
@@ -85,14 +83,38 @@ export class Column {
     if (id !== undefined) return id;
     id = this.atoms.push(v) - 1;
     ids.set(v, id);
-    const fk = facetKey(v);
-    let group = this.groupIds.get(fk);
-    if (group === undefined) {
-      group = this.groups.push({ key: fk, num: typeof v === "number" ? v : null, label: facetLabel(v), mixed: false }) - 1;
-      this.groupIds.set(fk, group);
-    } else if (this.groups[group]!.label !== facetLabel(v)) this.groups[group]!.mixed = true;
-    this.atomGroup.push(group);
+    this.atomGroup.push(this.group(v));
     return id;
+  }
+
+  private group(v: Leaf): number {
+    if (typeof v === "number") {
+      let group = this.numberGroups.get(v);
+      if (group === undefined) {
+        group = this.groupNum.push(v) - 1;
+        this.groupText.push(null);
+        this.numberGroups.set(v, group);
+      }
+      return group;
+    }
+    const key = foldFacet(String(v));
+    const label = facetLabel(v);
+    let group = this.textGroups.get(key);
+    if (group === undefined) {
+      group = this.groupNum.push(null) - 1;
+      this.groupText.push(label);
+      this.textGroups.set(key, group);
+    } else if (this.groupText[group] !== label) this.mixed.add(group);
+    return group;
+  }
+
+  get groupCount(): number {
+    return this.groupNum.length;
+  }
+
+  /** The label of a group as format.ts shows it (for a mixed group: its first atom's). */
+  label(group: number): string {
+    return this.groupText[group] ?? String(this.groupNum[group]);
   }
 
   /** (Re)reads one slot's document; undefined empties the slot. */
@@ -137,7 +159,7 @@ export class Column {
       this.many[slot] = list;
       const groups: number[] = [];
       for (const a of list) if (!groups.includes(this.atomGroup[a]!)) groups.push(this.atomGroup[a]!);
-      this.manyGroups[slot] = groups;
+      if (groups.length < list.length) this.manyGroups[slot] = groups;
     } else this.single[slot] = first;
   }
 

@@ -11,12 +11,17 @@ import type { IndexSettings } from "./settings.js";
 
 /** How many slots of `slots` hold each group (a slot counts once per group, as format.ts counts a document once per key). */
 function countGroups(column: Column, slots: ArrayLike<number>): Int32Array {
-  const counts = new Int32Array(column.groups.length);
-  const { single, manyGroups, atomGroup } = column;
+  const counts = new Int32Array(column.groupCount);
+  const { single, many, manyGroups, atomGroup } = column;
   for (let i = 0; i < slots.length; i++) {
-    const a = single[slots[i]!]!;
+    const slot = slots[i]!;
+    const a = single[slot]!;
     if (a >= 0) counts[atomGroup[a]!]!++;
-    else if (a === MANY) for (const g of manyGroups[slots[i]!]!) counts[g]!++;
+    else if (a === MANY) {
+      const groups = manyGroups[slot];
+      if (groups) for (const g of groups) counts[g]!++;
+      else for (const atom of many[slot]!) counts[atomGroup[atom]!]!++;
+    }
   }
   return counts;
 }
@@ -27,7 +32,7 @@ function firstLabel(column: Column, group: number, slots: ArrayLike<number>): st
     const atoms = column.atomsOf(slots[i]!);
     for (let j = 0; j < atoms.length; j++) if (column.atomGroup[atoms[j]!] === group) return facetLabel(column.atoms[atoms[j]!]!);
   }
-  return column.groups[group]!.label;
+  return column.label(group);
 }
 
 /** Facets of the documents in `slots` (hit order); `dropEmpty` leaves out facets no matched document has. */
@@ -43,9 +48,9 @@ export function countFacets(settings: IndexSettings, facets: string[], slots: Ar
     let max = -Infinity;
     for (let g = 0; g < counts.length; g++) {
       if (counts[g] === 0) continue;
-      const group = column.groups[g]!;
-      entries.push([group.mixed ? firstLabel(column, g, slots) : group.label, counts[g]!, group.num]);
-      if (group.num !== null) (min = Math.min(min, group.num)), (max = Math.max(max, group.num));
+      const num = column.groupNum[g]!;
+      entries.push([column.mixed.has(g) ? firstLabel(column, g, slots) : column.label(g), counts[g]!, num]);
+      if (num !== null) (min = Math.min(min, num)), (max = Math.max(max, num));
     }
     if (dropEmpty && entries.length === 0) continue;
     const cmp = facetOrder(sortFacetValuesBy[facet] ?? sortFacetValuesBy["*"] ?? "alpha");
