@@ -49,14 +49,15 @@ export function countFacets(settings: IndexSettings, facets: string[], slots: Ar
     for (let g = 0; g < counts.length; g++) {
       if (counts[g] === 0) continue;
       const num = column.groupNum[g]!;
-      entries.push([column.mixed.has(g) ? firstLabel(column, g, slots) : column.label(g), counts[g]!, num]);
+      // Numbers order by value, so their label (String(num)) is only written for the values shown.
+      entries.push([num !== null ? "" : column.mixed.has(g) ? firstLabel(column, g, slots) : column.label(g), counts[g]!, num]);
       if (num !== null) (min = Math.min(min, num)), (max = Math.max(max, num));
     }
     if (dropEmpty && entries.length === 0) continue;
     const cmp = facetOrder(sortFacetValuesBy[facet] ?? sortFacetValuesBy["*"] ?? "alpha");
     // Values unique to a document (ids) can number in the 100,000s; only the shown ones need ordering.
     const shown = maxValuesPerFacet * 8 < entries.length ? topK(entries, cmp, maxValuesPerFacet) : entries.sort(cmp).slice(0, maxValuesPerFacet);
-    facetDistribution[facet] = Object.fromEntries(shown.map(([label, count]) => [label, count]));
+    facetDistribution[facet] = Object.fromEntries(shown.map(([label, count, num]) => [num !== null ? String(num) : label, count]));
     if (min !== Infinity) facetStats[facet] = { min, max };
   }
   return { facetDistribution, facetStats };

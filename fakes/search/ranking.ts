@@ -62,12 +62,10 @@ function compareKeys(a: SortKey, b: SortKey, asc: boolean): number {
   return a.str < b.str ? -dir : a.str > b.str ? dir : 0;
 }
 
-/**
- * Orders hits following the ranking rules (`sort` is the search's sort parameter).
- * Only the best `limit` hits are fully ordered when that is much less than all of them.
- */
-export function rankHits(hits: RankedHit[], rules: string[], sort: SortSpec[], hasQuery: boolean, limit = Infinity): RankedHit[] {
-  type Cmp = (a: RankedHit, b: RankedHit) => number;
+type Cmp = (a: RankedHit, b: RankedHit) => number;
+
+/** The comparisons the ranking rules make, in order, and the sort keys they read. */
+function rankingOrder(rules: string[], sort: SortSpec[], hasQuery: boolean): { specs: SortSpec[]; cmps: Cmp[] } {
   const specs: SortSpec[] = [];
   const cmps: Cmp[] = [];
   const sortCmp = (spec: SortSpec): Cmp => {
@@ -86,6 +84,20 @@ export function rankHits(hits: RankedHit[], rules: string[], sort: SortSpec[], h
     }
   }
   if (hasQuery) cmps.push((a, b) => b.bm25 - a.bm25);
+  return { specs, cmps };
+}
+
+/** Whether a placeholder search keeps insertion order (no sort rule applies), so only its first hits matter. */
+export function keepsInsertionOrder(rules: string[], sort: SortSpec[]): boolean {
+  return rankingOrder(rules, sort, false).cmps.length === 0;
+}
+
+/**
+ * Orders hits following the ranking rules (`sort` is the search's sort parameter).
+ * Only the best `limit` hits are fully ordered when that is much less than all of them.
+ */
+export function rankHits(hits: RankedHit[], rules: string[], sort: SortSpec[], hasQuery: boolean, limit = Infinity): RankedHit[] {
+  const { specs, cmps } = rankingOrder(rules, sort, hasQuery);
   // Placeholder search without sort: hits already come in insertion order.
   if (cmps.length === 0) return hits.slice(0, limit);
   if (specs.length) for (const h of hits) h.keys = specs.map((s) => sortKey(h.doc, s));

@@ -1,13 +1,14 @@
 // One search request end to end: parameter validation (POST body or GET query),
 // matching, filtering, ranking, distinct, facets, pagination and formatting.
 
+import type { Bitset } from "./bitset.js";
 import { bad, invalidType } from "./errors.js";
 import { countFacets } from "./facet-count.js";
 import { leafValuesAt, patternMatches, type Doc } from "./fields.js";
 import { filterSlots } from "./filter-index.js";
 import { formatHit, resolveFacets, type FacetResult } from "./format.js";
 import { expandLastWord, matchQuery, planQuery, wordMatcher } from "./matching.js";
-import { rankHits, rankingScore, type RankedHit, type SortSpec } from "./ranking.js";
+import { keepsInsertionOrder, rankHits, rankingScore, type RankedHit, type SortSpec } from "./ranking.js";
 import { filterablePatterns } from "./settings.js";
 import type { SearchIndex } from "./engine.js";
 
@@ -134,7 +135,9 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
 
   const plan = planQuery(q, settings, params.matchingStrategy ?? "last");
   const hasQuery = plan.positions.length > 0;
-  let hits: RankedHit[];
+  let hits: RankedHit[] = [];
+  // A placeholder search's matches: every slot the filter lets through, in insertion order.
+  let placeholder: Int32Array | null = null;
   const fields = index.searchFields();
   if (hasQuery) {
     const restrict = params.attributesToSearchOn ?? null;
@@ -158,14 +161,7 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
       expansions,
     );
     if (allowed) hits = hits.filter((h) => allowed.has(h.slot));
-  } else {
-    hits = [];
-    for (const slot of slots.ordered()) {
-      if (allowed && !allowed.has(slot)) continue;
-      const id = slots.id(slot)!;
-      hits.push({ id, doc: slots.doc(slot)!, words: 0, typos: 0, attribute: 0, exact: 0, bm25: 0, ordinal: slots.ordinal(slot), slot });
-    }
-  }
+  } else placeholder = allowedInOrder(slots.ordered(), allowed);
   const maxTotalHits = settings.pagination.maxTotalHits;
   const pageMode = params.page != null || params.hitsPerPage != null;
   const hitsPerPage = params.hitsPerPage ?? 20;
@@ -177,7 +173,17 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
   const threshold = params.rankingScoreThreshold;
   // distinct and the score threshold drop hits, so they need every hit ranked; otherwise only the page window.
   const needAll = Boolean(distinct) || typeof threshold === "number";
-  let ranked = rankHits(hits, settings.rankingRules, sort, hasQuery, needAll ? Infinity : Math.min(offset + limit, maxTotalHits));
+  const window = needAll ? Infinity : Math.min(offset + limit, maxTotalHits);
+  if (placeholder) {
+    // Placeholder hits carry no scores: unless a sort rule reorders them, the window is all there is to rank.
+    const count = keepsInsertionOrder(settings.rankingRules, sort) ? Math.min(placeholder.length, window) : placeholder.length;
+    hits = new Array<RankedHit>(count);
+    for (let i = 0; i < count; i++) {
+      const slot = placeholder[i]!;
+      hits[i] = { id: slots.id(slot)!, doc: slots.doc(slot)!, words: 0, typos: 0, attribute: 0, exact: 0, bm25: 0, ordinal: slots.ordinal(slot), slot };
+    }
+  }
+  let ranked = rankHits(hits, settings.rankingRules, sort, hasQuery, window);
   if (distinct) {
     const seen = new Set<string>();
     ranked = ranked.filter((h) => {
@@ -190,16 +196,17 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
     });
   }
   if (typeof threshold === "number") ranked = ranked.filter((h) => scoreOf(h) >= threshold);
-  const matched = needAll ? ranked : hits;
+  // What the total and the facets count: every hit, or those distinct and the threshold kept.
+  const matchedCount = needAll ? ranked.length : (placeholder?.length ?? hits.length);
 
   let facets: FacetResult | null = null;
   if (params.facets) {
-    const matchedSlots = Int32Array.from(matched, (h) => h.slot);
+    const matchedSlots = needAll ? slotsOf(ranked) : (placeholder ?? slotsOf(hits));
     const wanted = resolveFacets(index.uid, settings, params.facets, params.facets.includes("*") ? index.columns.fieldPaths(matchedSlots) : []);
     facets = countFacets(settings, wanted, matchedSlots, index.columns, params.facets.includes("*"));
   }
 
-  const total = Math.min(matched.length, maxTotalHits);
+  const total = Math.min(matchedCount, maxTotalHits);
   const pageHits = ranked.slice(Math.min(offset, maxTotalHits), Math.min(offset + limit, maxTotalHits));
 
   const matcher = hasQuery ? wordMatcher(plan) : null;
@@ -229,6 +236,21 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
   else Object.assign(result, { limit, offset, estimatedTotalHits: total });
   if (facets) Object.assign(result, facets);
   return result;
+}
+
+/** The slots of `order` that `allowed` holds (all of them without a filter), in order. */
+function allowedInOrder(order: Int32Array, allowed: Bitset | null): Int32Array {
+  if (!allowed) return order;
+  const out = new Int32Array(order.length);
+  let n = 0;
+  for (const slot of order) if (allowed.has(slot)) out[n++] = slot;
+  return out.subarray(0, n);
+}
+
+function slotsOf(hits: RankedHit[]): Int32Array {
+  const out = new Int32Array(hits.length);
+  for (let i = 0; i < hits.length; i++) out[i] = hits[i]!.slot;
+  return out;
 }
 
 function rankingDetails(h: RankedHit, plan: ReturnType<typeof planQuery>, hasQuery: boolean): Doc {
