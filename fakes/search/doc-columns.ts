@@ -2,16 +2,16 @@
 // numbers (slots.ts), one column per attribute a query has used (columns.ts)
 // and each document's field paths (what `facets: ["*"]` lists). Writes only
 // note the changed slots; the next query brings the columns up to date, or
-// drops them after a bulk load so they are rebuilt in one pass. `warm()` does
-// that rebuilding when the server is idle, so the first search after a load
-// does not pay for it.
+// drops them after many replacements or deletions (whose old values would
+// linger in them) so they are rebuilt in one pass. `warm()` does that work
+// when the server is idle, so the first search after a load does not pay for it.
 
 import { Column } from "./columns.js";
 import type { Doc } from "./fields.js";
 import { Shapes } from "./shapes.js";
 import { Slots } from "./slots.js";
 
-/** Above this share of changed documents, rebuilding a column is cheaper than patching it. */
+/** Above this share of replaced or deleted documents, columns are rebuilt rather than patched. */
 const REBUILD_RATIO = 0.3;
 /** Distinct field-path lists kept; beyond that (documents of many shapes) the cache starts over. */
 const MAX_SHAPES = 10_000;
@@ -22,6 +22,8 @@ export class DocColumns {
   readonly slots = new Slots();
   private readonly columns = new Map<string, Column>();
   private readonly pending = new Set<number>();
+  /** Pending changes that replaced or deleted a document (new documents leave nothing stale). */
+  private stale = 0;
   /** Slot → its document's field-path list in `shapes` (-1: not read yet). */
   private shapeOf = new Int32Array(0);
   private shapes = new Shapes();
@@ -30,15 +32,22 @@ export class DocColumns {
   private closed = false;
 
   put(id: string, doc: Doc): void {
+    const replacing = this.slots.slot(id) !== undefined;
     const slot = this.slots.put(id, doc);
-    if (this.columns.size) this.pending.add(slot);
+    if (this.columns.size) {
+      this.pending.add(slot);
+      if (replacing) this.stale++;
+    }
     if (slot < this.shapeOf.length) this.shapeOf[slot] = -1;
   }
 
   remove(id: string): void {
     const slot = this.slots.remove(id);
     if (slot < 0) return;
-    if (this.columns.size) this.pending.add(slot);
+    if (this.columns.size) {
+      this.pending.add(slot);
+      this.stale++;
+    }
     this.shapeOf[slot] = -1;
   }
 
@@ -84,9 +93,10 @@ export class DocColumns {
 
   private sync(): void {
     if (this.pending.size === 0) return;
-    if (this.pending.size > this.slots.count * REBUILD_RATIO) this.columns.clear();
+    if (this.stale > this.slots.count * REBUILD_RATIO) this.columns.clear();
     else for (const column of this.columns.values()) for (const slot of this.pending) column.set(slot, this.slots.doc(slot));
     this.pending.clear();
+    this.stale = 0;
   }
 
   /** Field paths of the given slots' documents, in first-seen order (as fieldPaths over each would give). */
