@@ -87,6 +87,13 @@ function rankingOrder(rules: string[], sort: SortSpec[], hasQuery: boolean): { s
   return { specs, cmps };
 }
 
+/** The slots of hits, in their order (what facets count). */
+export function hitSlots(hits: RankedHit[]): Int32Array {
+  const out = new Int32Array(hits.length);
+  for (let i = 0; i < hits.length; i++) out[i] = hits[i]!.slot;
+  return out;
+}
+
 /** Whether a placeholder search keeps insertion order (no sort rule applies), so only its first hits matter. */
 export function keepsInsertionOrder(rules: string[], sort: SortSpec[]): boolean {
   return rankingOrder(rules, sort, false).cmps.length === 0;

@@ -1,14 +1,13 @@
 // One search request end to end: parameter validation (POST body or GET query),
 // matching, filtering, ranking, distinct, facets, pagination and formatting.
 
-import type { Bitset } from "./bitset.js";
 import { bad, invalidType } from "./errors.js";
 import { countFacets } from "./facet-count.js";
 import { leafValuesAt, patternMatches, type Doc } from "./fields.js";
 import { filterSlots } from "./filter-index.js";
 import { formatHit, resolveFacets, type FacetResult } from "./format.js";
 import { expandLastWord, matchQuery, planQuery, wordMatcher } from "./matching.js";
-import { keepsInsertionOrder, rankHits, rankingScore, type RankedHit, type SortSpec } from "./ranking.js";
+import { hitSlots, keepsInsertionOrder, rankHits, rankingScore, type RankedHit, type SortSpec } from "./ranking.js";
 import { filterablePatterns } from "./settings.js";
 import type { SearchIndex } from "./engine.js";
 
@@ -161,7 +160,7 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
       expansions,
     );
     if (allowed) hits = hits.filter((h) => allowed.has(h.slot));
-  } else placeholder = allowedInOrder(slots.ordered(), allowed);
+  } else placeholder = slots.ordered(allowed);
   const maxTotalHits = settings.pagination.maxTotalHits;
   const pageMode = params.page != null || params.hitsPerPage != null;
   const hitsPerPage = params.hitsPerPage ?? 20;
@@ -201,7 +200,7 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
 
   let facets: FacetResult | null = null;
   if (params.facets) {
-    const matchedSlots = needAll ? slotsOf(ranked) : (placeholder ?? slotsOf(hits));
+    const matchedSlots = needAll ? hitSlots(ranked) : (placeholder ?? hitSlots(hits));
     const wanted = resolveFacets(index.uid, settings, params.facets, params.facets.includes("*") ? index.columns.fieldPaths(matchedSlots) : []);
     facets = countFacets(settings, wanted, matchedSlots, index.columns, params.facets.includes("*"));
   }
@@ -236,21 +235,6 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
   else Object.assign(result, { limit, offset, estimatedTotalHits: total });
   if (facets) Object.assign(result, facets);
   return result;
-}
-
-/** The slots of `order` that `allowed` holds (all of them without a filter), in order. */
-function allowedInOrder(order: Int32Array, allowed: Bitset | null): Int32Array {
-  if (!allowed) return order;
-  const out = new Int32Array(order.length);
-  let n = 0;
-  for (const slot of order) if (allowed.has(slot)) out[n++] = slot;
-  return out.subarray(0, n);
-}
-
-function slotsOf(hits: RankedHit[]): Int32Array {
-  const out = new Int32Array(hits.length);
-  for (let i = 0; i < hits.length; i++) out[i] = hits[i]!.slot;
-  return out;
 }
 
 function rankingDetails(h: RankedHit, plan: ReturnType<typeof planQuery>, hasQuery: boolean): Doc {

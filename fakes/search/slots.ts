@@ -70,14 +70,21 @@ export class Slots {
     return this.ordinals[slot]!;
   }
 
-  /** Live slots in insertion order (the placeholder-search order); rebuilt after adds or deletes. */
-  ordered(): Int32Array {
+  /**
+   * Live slots in insertion order (the placeholder-search order), only those `allowed` holds
+   * when given. The full list is kept until the next add or delete: callers must not change it.
+   */
+  ordered(allowed: Bitset | null = null): Int32Array {
     if (!this.order) {
       this.order = Int32Array.from(this.byId.values());
       this.liveSet = new Bitset(this.capacity);
       for (const slot of this.order) this.liveSet.add(slot);
     }
-    return this.order;
+    if (!allowed) return this.order;
+    const out = new Int32Array(this.order.length);
+    let n = 0;
+    for (const slot of this.order) if (allowed.has(slot)) out[n++] = slot;
+    return out.subarray(0, n);
   }
 
   /** Every live slot; callers get their own copy to combine. */
