@@ -3,10 +3,12 @@
 // (see fulltext.ts).
 
 import type MiniSearch from "minisearch";
+import { DocColumns } from "./doc-columns.js";
 import { bad, indexAlreadyExists, indexNotFound, invalidIndexUid } from "./errors.js";
 import { patternMatches, pickFields, type Doc } from "./fields.js";
 import { FullTextIndex } from "./fulltext.js";
-import { filterAttributes, FilterSyntaxError, matchesFilter, parseFilter, spanSuffix, type FilterNode } from "./filter.js";
+import { filterAttributes, FilterSyntaxError, parseFilter, spanSuffix, type FilterNode } from "./filter.js";
+import { filterSlots } from "./filter-index.js";
 import { documentId, inferPrimaryKey } from "./payload.js";
 import { runSearch, type SearchParams, type SearchResult } from "./search.js";
 import { applySettings, defaultSettings, filterablePatterns, type IndexSettings, type SettingsPatch } from "./settings.js";
@@ -48,8 +50,8 @@ export class SearchIndex {
   updatedAt: string;
   settings: IndexSettings = defaultSettings();
   readonly docs = new Map<string, Doc>();
-  private readonly ordinals = new Map<string, number>();
-  private nextOrdinal = 0;
+  /** Slots, columns and field paths of the same documents, for filters and facets. */
+  readonly columns = new DocColumns();
   /** Top-level fields in first-seen order: the searchable fields when searchableAttributes is ["*"]. */
   private readonly topFields: string[] = [];
   private readonly topFieldSet = new Set<string>();
@@ -57,6 +59,7 @@ export class SearchIndex {
     docs: this.docs,
     primaryKey: () => this.primaryKey ?? "id",
     fields: () => this.searchFields(),
+    ordinal: (id) => this.ordinal(id),
   });
   private statsCache: { fieldDistribution: Record<string, number>; bytes: number } | null = null;
 
@@ -90,7 +93,7 @@ export class SearchIndex {
       Object.assign(this, { primaryKey: op.meta.primaryKey, createdAt: op.meta.createdAt, updatedAt: op.meta.updatedAt });
       this.settings = { ...defaultSettings(), ...op.settings };
     } else if (op.t === "put") this.put(String(op.doc[this.primaryKey ?? "id"]), op.doc);
-    else if (this.docs.delete(op.id)) this.ordinals.delete(op.id), this.text.changed(op.id);
+    else if (this.docs.delete(op.id)) this.text.changed(op.id), this.columns.remove(op.id);
   }
 
   markSaved(): void {
@@ -109,15 +112,16 @@ export class SearchIndex {
 
   /** Insertion rank of a document, Meilisearch's final tie-break. */
   ordinal(id: string): number {
-    return this.ordinals.get(id) ?? Number.MAX_SAFE_INTEGER;
+    const slot = this.columns.slots.slot(id);
+    return slot === undefined ? Number.MAX_SAFE_INTEGER : this.columns.slots.ordinal(slot);
   }
 
   private put(id: string, doc: Doc): void {
-    if (!this.ordinals.has(id)) this.ordinals.set(id, this.nextOrdinal++);
     for (const key of Object.keys(doc)) {
       if (!this.topFieldSet.has(key)) this.topFieldSet.add(key), this.topFields.push(key);
     }
     this.docs.set(id, doc);
+    this.columns.put(id, doc);
     this.text.changed(id);
     this.unsaved.add(id);
   }
@@ -145,14 +149,17 @@ export class SearchIndex {
   deleteIds(ids: string[]): number {
     let n = 0;
     for (const id of ids) {
-      if (this.docs.delete(id)) n++, this.ordinals.delete(id), this.text.changed(id), this.unsaved.add(id);
+      if (this.docs.delete(id)) n++, this.text.changed(id), this.columns.remove(id), this.unsaved.add(id);
     }
     if (n) this.touch();
     return n;
   }
 
   deleteWhere(filter: FilterNode): number {
-    const ids = [...this.docs].filter(([, d]) => matchesFilter(filter, d)).map(([id]) => id);
+    const { slots } = this.columns;
+    const matched = filterSlots(filter, this.columns);
+    const ids: string[] = [];
+    for (const slot of slots.ordered()) if (matched.has(slot)) ids.push(slots.id(slot)!);
     return this.deleteIds(ids);
   }
 
@@ -200,6 +207,12 @@ export class SearchIndex {
     return this.text.sync();
   }
 
+  /** Background catch-up after writes: the full-text index, then the filter and facet columns. */
+  async warm(): Promise<void> {
+    await this.text.warm();
+    await this.columns.warm((path) => filterablePatterns(this.settings).some((p) => patternMatches(p, path)));
+  }
+
   search(params: SearchParams): SearchResult {
     return runSearch(this, params);
   }
@@ -215,10 +228,11 @@ export class SearchIndex {
     const offset = q.offset ?? 0;
     const limit = q.limit ?? 20;
     const filter = this.compileFilter(q.filter, "invalid_document_filter");
+    const allowed = filter.type === "all" ? null : filterSlots(filter, this.columns);
     let docs: Iterable<[string, Doc]> = this.docs;
     if (q.ids) docs = q.ids.flatMap((id) => (this.docs.has(String(id)) ? [[String(id), this.docs.get(String(id))!] as [string, Doc]] : []));
     const matched: Doc[] = [];
-    for (const [, doc] of docs) if (filter.type === "all" || matchesFilter(filter, doc)) matched.push(doc);
+    for (const [id, doc] of docs) if (!allowed || allowed.has(this.columns.slots.slot(id)!)) matched.push(doc);
     return {
       results: matched.slice(offset, offset + limit).map((d) => this.display(d, q.fields)),
       offset,

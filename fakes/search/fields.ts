@@ -34,41 +34,45 @@ function collect(value: unknown, segs: string[], i: number, out: unknown[]): voi
 /** Scalar leaves at `path`: nested arrays flattened, nulls and objects dropped. */
 export function leafValuesAt(doc: unknown, path: string): (string | number | boolean)[] {
   const out: (string | number | boolean)[] = [];
-  const walk = (v: unknown): void => {
-    if (Array.isArray(v)) v.forEach(walk);
-    else if (typeof v === "string" || typeof v === "number" || typeof v === "boolean") out.push(v);
-  };
-  rawValuesAt(doc, path).forEach(walk);
+  for (const v of rawValuesAt(doc, path)) pushLeaves(v, out);
   return out;
+}
+
+// Module-level walkers rather than closures: these run per document per query.
+function pushLeaves(v: unknown, out: (string | number | boolean)[]): void {
+  if (Array.isArray(v)) for (const item of v) pushLeaves(item, out);
+  else if (typeof v === "string" || typeof v === "number" || typeof v === "boolean") out.push(v);
 }
 
 /** Every scalar string/number under a value, for full-text indexing of a field. */
 export function textOf(value: unknown): string {
   const parts: string[] = [];
-  const walk = (v: unknown): void => {
-    if (typeof v === "string") parts.push(v);
-    else if (typeof v === "number" || typeof v === "boolean") parts.push(String(v));
-    else if (Array.isArray(v)) v.forEach(walk);
-    else if (isPlainObject(v)) Object.values(v).forEach(walk);
-  };
-  walk(value);
+  pushText(value, parts);
   return parts.join(" \n ");
+}
+
+function pushText(v: unknown, parts: string[]): void {
+  if (typeof v === "string") parts.push(v);
+  else if (typeof v === "number" || typeof v === "boolean") parts.push(String(v));
+  else if (Array.isArray(v)) for (const item of v) pushText(item, parts);
+  else if (isPlainObject(v)) for (const item of Object.values(v)) pushText(item, parts);
 }
 
 /** Dotted paths of every field (objects and leaves) of a document, in document order. */
 export function fieldPaths(doc: Doc, into: Set<string> = new Set()): Set<string> {
-  const walk = (v: unknown, prefix: string): void => {
-    if (Array.isArray(v)) v.forEach((item) => walk(item, prefix));
-    else if (isPlainObject(v)) {
-      for (const [k, child] of Object.entries(v)) {
-        const p = prefix ? `${prefix}.${k}` : k;
-        into.add(p);
-        walk(child, p);
-      }
-    }
-  };
-  walk(doc, "");
+  walkPaths(doc, "", into);
   return into;
+}
+
+function walkPaths(v: unknown, prefix: string, into: Set<string>): void {
+  if (Array.isArray(v)) for (const item of v) walkPaths(item, prefix, into);
+  else if (isPlainObject(v)) {
+    for (const k of Object.keys(v)) {
+      const p = prefix ? `${prefix}.${k}` : k;
+      into.add(p);
+      walkPaths(v[k], p, into);
+    }
+  }
 }
 
 /**
@@ -78,14 +82,22 @@ export function fieldPaths(doc: Doc, into: Set<string> = new Set()): Set<string>
 export function patternMatches(pattern: string, field: string): boolean {
   if (pattern === "*" || pattern === field || field.startsWith(`${pattern}.`)) return true;
   if (!pattern.includes("*")) return false;
-  const re = new RegExp(
-    `^${pattern
-      .split("*")
-      .map((s) => s.replace(/[.+?^${}()|[\]\\]/g, "\\$&"))
-      .join(".*")}$`,
-  );
+  let re = patternCache.get(pattern);
+  if (!re) {
+    re = new RegExp(
+      `^${pattern
+        .split("*")
+        .map((s) => s.replace(/[.+?^${}()|[\]\\]/g, "\\$&"))
+        .join(".*")}$`,
+    );
+    if (patternCache.size > 1000) patternCache.clear();
+    patternCache.set(pattern, re);
+  }
   return re.test(field);
 }
+
+/** Wildcard patterns compiled once: facets ["*"] tests every field path against them per search. */
+const patternCache = new Map<string, RegExp>();
 
 /** Keeps only the listed attributes (dotted paths allowed), as attributesToRetrieve does. */
 export function pickFields(doc: Doc, fields: readonly string[]): Doc {

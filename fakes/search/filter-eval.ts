@@ -6,14 +6,15 @@
 import { leafValuesAt, rawValuesAt, isPlainObject } from "./fields.js";
 import { foldFacet, parseNumber, type FilterNode, type FilterValue } from "./filter.js";
 
-type Leaf = string | number | boolean;
+export type Leaf = string | number | boolean;
 
 const leafNumber = (v: Leaf): number | null =>
   typeof v === "number" ? v : typeof v === "string" ? parseNumber(v) : null;
 const leafString = (v: Leaf): string | null =>
   typeof v === "string" ? foldFacet(v) : typeof v === "boolean" ? String(v) : null;
 
-function equals(v: Leaf, target: FilterValue): boolean {
+/** Whether one leaf value satisfies `= target` (the filter index asks this once per distinct value). */
+export function equals(v: Leaf, target: FilterValue): boolean {
   if (target.num !== null && typeof v === "number") return v === target.num;
   const s = leafString(v);
   if (s !== null && s === target.folded) return true;
@@ -21,7 +22,8 @@ function equals(v: Leaf, target: FilterValue): boolean {
   return n !== null && target.num !== null && n === target.num;
 }
 
-function compare(v: Leaf, op: ">" | ">=" | "<" | "<=", target: FilterValue): boolean {
+/** Whether one leaf value satisfies `op target`. */
+export function compare(v: Leaf, op: ">" | ">=" | "<" | "<=", target: FilterValue): boolean {
   let cmp: number;
   if (target.num !== null) {
     const n = leafNumber(v);
@@ -36,7 +38,7 @@ function compare(v: Leaf, op: ">" | ">=" | "<" | "<=", target: FilterValue): boo
   return op === ">" ? cmp > 0 : op === ">=" ? cmp >= 0 : op === "<" ? cmp < 0 : cmp <= 0;
 }
 
-const isEmptyValue = (v: unknown): boolean =>
+export const isEmptyValue = (v: unknown): boolean =>
   v === "" || (Array.isArray(v) && v.length === 0) || (isPlainObject(v) && Object.keys(v).length === 0);
 
 function geoPoint(doc: unknown): [number, number] | null {

@@ -50,7 +50,10 @@ export function parseNumber(s: string): number | null {
   return Number.isFinite(n) ? n : null;
 }
 
-export const foldFacet = (s: string): string => s.trim().normalize("NFKD").toLowerCase();
+const ASCII_RE = /^[\x00-\x7f]*$/;
+
+/** Lowercased + NFKD; ASCII is its own NFKD form, so most values skip the normalisation. */
+export const foldFacet = (s: string): string => (ASCII_RE.test(s) ? s.trim().toLowerCase() : s.trim().normalize("NFKD").toLowerCase());
 
 export function makeValue(raw: string): FilterValue {
   return { raw, folded: foldFacet(raw), num: parseNumber(raw) };

@@ -13,14 +13,22 @@ export interface FacetResult {
   facetStats: Record<string, { min: number; max: number }>;
 }
 
-/** Resolves requested facets ("*" = every filterable field) and rejects non-filterable ones. */
-export function resolveFacets(uid: string, settings: IndexSettings, facets: string[], docs: Iterable<Doc>): string[] {
+/** Field paths of documents in first-seen order: what "*" picks facets from. */
+export function documentPaths(docs: Iterable<Doc>): Set<string> {
+  const paths = new Set<string>();
+  for (const d of docs) fieldPaths(d, paths);
+  return paths;
+}
+
+/**
+ * Resolves requested facets ("*" = every filterable path of the matched documents,
+ * `paths` as documentPaths gives them) and rejects non-filterable ones.
+ */
+export function resolveFacets(uid: string, settings: IndexSettings, facets: string[], paths: Iterable<string>): string[] {
   const patterns = filterablePatterns(settings);
   const out: string[] = [];
   for (const facet of facets) {
     if (facet === "*") {
-      const paths = new Set<string>();
-      for (const d of docs) fieldPaths(d, paths);
       for (const p of paths) if (patterns.some((pt) => patternMatches(pt, p)) && !out.includes(p)) out.push(p);
       continue;
     }
@@ -35,13 +43,35 @@ export function resolveFacets(uid: string, settings: IndexSettings, facets: stri
   return out;
 }
 
+/** A facet value: label, count, and the number for numeric values. */
+export type FacetEntry = [label: string, count: number, num: number | null];
+
+/**
+ * Facet values in answer order: by count first when asked, then numbers by value
+ * before strings by folded label. Distinct values never compare equal, so any
+ * sort (or a partial one) gives the same order.
+ */
+export function facetOrder(order: "alpha" | "count"): (a: FacetEntry, b: FacetEntry) => number {
+  return (a, b) => {
+    if (order === "count" && a[1] !== b[1]) return b[1] - a[1];
+    if (a[2] !== null || b[2] !== null) return a[2] === null ? 1 : b[2] === null ? -1 : a[2] - b[2];
+    const fa = foldFacet(a[0]);
+    const fb = foldFacet(b[0]);
+    return fa < fb ? -1 : fa > fb ? 1 : 0;
+  };
+}
+
+/**
+ * Facets by reading every matched document: the reference for facet-count.ts,
+ * which answers searches from the columns.
+ */
 export function computeFacets(settings: IndexSettings, facets: string[], docs: Doc[], dropEmpty: boolean): FacetResult {
   const facetDistribution: FacetResult["facetDistribution"] = {};
   const facetStats: FacetResult["facetStats"] = {};
   const { maxValuesPerFacet, sortFacetValuesBy } = settings.faceting;
   for (const facet of facets) {
     // key → [label, count, numeric value]; labels keep the first-seen original casing.
-    const counts = new Map<string, [string, number, number | null]>();
+    const counts = new Map<string, FacetEntry>();
     let min = Infinity;
     let max = -Infinity;
     for (const doc of docs) {
@@ -57,14 +87,7 @@ export function computeFacets(settings: IndexSettings, facets: string[], docs: D
       }
     }
     if (dropEmpty && counts.size === 0) continue;
-    const order = sortFacetValuesBy[facet] ?? sortFacetValuesBy["*"] ?? "alpha";
-    const entries = [...counts.values()].sort((a, b) => {
-      if (order === "count" && a[1] !== b[1]) return b[1] - a[1];
-      if (a[2] !== null || b[2] !== null) return a[2] === null ? 1 : b[2] === null ? -1 : a[2] - b[2];
-      const fa = foldFacet(a[0]);
-      const fb = foldFacet(b[0]);
-      return fa < fb ? -1 : fa > fb ? 1 : 0;
-    });
+    const entries = [...counts.values()].sort(facetOrder(sortFacetValuesBy[facet] ?? sortFacetValuesBy["*"] ?? "alpha"));
     facetDistribution[facet] = Object.fromEntries(entries.slice(0, maxValuesPerFacet).map(([label, count]) => [label, count]));
     if (min !== Infinity) facetStats[facet] = { min, max };
   }

@@ -121,7 +121,7 @@ export function matchQuery(
   plan: QueryPlan,
   fields: string[],
   restrictTo: string[] | null,
-  lookup: (id: string) => { doc: Doc; ordinal: number } | undefined,
+  lookup: (id: string) => { doc: Doc; ordinal: number; slot: number } | undefined,
   expansions: string[] = [],
 ): RankedHit[] {
   const last = plan.positions.length - 1;
@@ -181,7 +181,7 @@ export function matchQuery(
     const id = String(r.id);
     const entry = lookup(id);
     if (!entry) continue;
-    hits.push({ id, doc: entry.doc, words, typos: typoSum, attribute, exact: exactCount, bm25: r.score, ordinal: entry.ordinal });
+    hits.push({ id, doc: entry.doc, words, typos: typoSum, attribute, exact: exactCount, bm25: r.score, ordinal: entry.ordinal, slot: entry.slot });
   }
   return hits;
 }

@@ -16,6 +16,8 @@ export interface RankedHit {
   exact: number;
   bm25: number;
   ordinal: number;
+  /** The document's slot (slots.ts), for the filter and facet structures. */
+  slot: number;
   /** Sort keys, filled by rankHits for the sort rules in use. */
   keys?: SortKey[];
 }
@@ -60,12 +62,10 @@ function compareKeys(a: SortKey, b: SortKey, asc: boolean): number {
   return a.str < b.str ? -dir : a.str > b.str ? dir : 0;
 }
 
-/**
- * Orders hits following the ranking rules (`sort` is the search's sort parameter).
- * Only the best `limit` hits are fully ordered when that is much less than all of them.
- */
-export function rankHits(hits: RankedHit[], rules: string[], sort: SortSpec[], hasQuery: boolean, limit = Infinity): RankedHit[] {
-  type Cmp = (a: RankedHit, b: RankedHit) => number;
+type Cmp = (a: RankedHit, b: RankedHit) => number;
+
+/** The comparisons the ranking rules make, in order, and the sort keys they read. */
+function rankingOrder(rules: string[], sort: SortSpec[], hasQuery: boolean): { specs: SortSpec[]; cmps: Cmp[] } {
   const specs: SortSpec[] = [];
   const cmps: Cmp[] = [];
   const sortCmp = (spec: SortSpec): Cmp => {
@@ -84,6 +84,27 @@ export function rankHits(hits: RankedHit[], rules: string[], sort: SortSpec[], h
     }
   }
   if (hasQuery) cmps.push((a, b) => b.bm25 - a.bm25);
+  return { specs, cmps };
+}
+
+/** The slots of hits, in their order (what facets count). */
+export function hitSlots(hits: RankedHit[]): Int32Array {
+  const out = new Int32Array(hits.length);
+  for (let i = 0; i < hits.length; i++) out[i] = hits[i]!.slot;
+  return out;
+}
+
+/** Whether a placeholder search keeps insertion order (no sort rule applies), so only its first hits matter. */
+export function keepsInsertionOrder(rules: string[], sort: SortSpec[]): boolean {
+  return rankingOrder(rules, sort, false).cmps.length === 0;
+}
+
+/**
+ * Orders hits following the ranking rules (`sort` is the search's sort parameter).
+ * Only the best `limit` hits are fully ordered when that is much less than all of them.
+ */
+export function rankHits(hits: RankedHit[], rules: string[], sort: SortSpec[], hasQuery: boolean, limit = Infinity): RankedHit[] {
+  const { specs, cmps } = rankingOrder(rules, sort, hasQuery);
   // Placeholder search without sort: hits already come in insertion order.
   if (cmps.length === 0) return hits.slice(0, limit);
   if (specs.length) for (const h of hits) h.keys = specs.map((s) => sortKey(h.doc, s));
@@ -99,7 +120,7 @@ export function rankHits(hits: RankedHit[], rules: string[], sort: SortSpec[], h
 }
 
 /** The k smallest items by `cmp`, sorted; a bounded max-heap keeps this O(n log k). */
-function topK<T>(items: T[], cmp: (a: T, b: T) => number, k: number): T[] {
+export function topK<T>(items: T[], cmp: (a: T, b: T) => number, k: number): T[] {
   if (k <= 0) return [];
   const heap: T[] = [];
   const down = (i: number) => {

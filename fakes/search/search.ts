@@ -2,11 +2,12 @@
 // matching, filtering, ranking, distinct, facets, pagination and formatting.
 
 import { bad, invalidType } from "./errors.js";
+import { countFacets } from "./facet-count.js";
 import { leafValuesAt, patternMatches, type Doc } from "./fields.js";
-import { matchesFilter } from "./filter.js";
-import { computeFacets, formatHit, resolveFacets, type FacetResult } from "./format.js";
+import { filterSlots } from "./filter-index.js";
+import { formatHit, resolveFacets, type FacetResult } from "./format.js";
 import { expandLastWord, matchQuery, planQuery, wordMatcher } from "./matching.js";
-import { rankHits, rankingScore, type RankedHit, type SortSpec } from "./ranking.js";
+import { hitSlots, keepsInsertionOrder, rankHits, rankingScore, type RankedHit, type SortSpec } from "./ranking.js";
 import { filterablePatterns } from "./settings.js";
 import type { SearchIndex } from "./engine.js";
 
@@ -127,9 +128,15 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
   if (params.distinct && !filterablePatterns(settings).some((p) => patternMatches(p, params.distinct!)))
     throw bad("invalid_search_distinct", `Index \`${index.uid}\`: Attribute \`${params.distinct}\` is not filterable and thus, cannot be used as distinct attribute.`);
 
+  // Documents the filter lets through, from the columns (null: no filter).
+  const allowed = filter.type === "all" ? null : filterSlots(filter, index.columns);
+  const { slots } = index.columns;
+
   const plan = planQuery(q, settings, params.matchingStrategy ?? "last");
   const hasQuery = plan.positions.length > 0;
-  let hits: RankedHit[];
+  let hits: RankedHit[] = [];
+  // A placeholder search's matches: every slot the filter lets through, in insertion order.
+  let placeholder: Int32Array | null = null;
   const fields = index.searchFields();
   if (hasQuery) {
     const restrict = params.attributesToSearchOn ?? null;
@@ -147,18 +154,13 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
       fields,
       restrictTo,
       (id) => {
-        const doc = index.docs.get(id);
-        return doc && { doc, ordinal: index.ordinal(id) };
+        const slot = slots.slot(id);
+        return slot === undefined ? undefined : { doc: slots.doc(slot)!, ordinal: slots.ordinal(slot), slot };
       },
       expansions,
     );
-    if (filter.type !== "all") hits = hits.filter((h) => matchesFilter(filter, h.doc));
-  } else {
-    hits = [];
-    for (const [id, doc] of index.docs) {
-      if (filter.type === "all" || matchesFilter(filter, doc)) hits.push({ id, doc, words: 0, typos: 0, attribute: 0, exact: 0, bm25: 0, ordinal: index.ordinal(id) });
-    }
-  }
+    if (allowed) hits = hits.filter((h) => allowed.has(h.slot));
+  } else placeholder = slots.ordered(allowed);
   const maxTotalHits = settings.pagination.maxTotalHits;
   const pageMode = params.page != null || params.hitsPerPage != null;
   const hitsPerPage = params.hitsPerPage ?? 20;
@@ -170,7 +172,17 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
   const threshold = params.rankingScoreThreshold;
   // distinct and the score threshold drop hits, so they need every hit ranked; otherwise only the page window.
   const needAll = Boolean(distinct) || typeof threshold === "number";
-  let ranked = rankHits(hits, settings.rankingRules, sort, hasQuery, needAll ? Infinity : Math.min(offset + limit, maxTotalHits));
+  const window = needAll ? Infinity : Math.min(offset + limit, maxTotalHits);
+  if (placeholder) {
+    // Placeholder hits carry no scores: unless a sort rule reorders them, the window is all there is to rank.
+    const count = keepsInsertionOrder(settings.rankingRules, sort) ? Math.min(placeholder.length, window) : placeholder.length;
+    hits = new Array<RankedHit>(count);
+    for (let i = 0; i < count; i++) {
+      const slot = placeholder[i]!;
+      hits[i] = { id: slots.id(slot)!, doc: slots.doc(slot)!, words: 0, typos: 0, attribute: 0, exact: 0, bm25: 0, ordinal: slots.ordinal(slot), slot };
+    }
+  }
+  let ranked = rankHits(hits, settings.rankingRules, sort, hasQuery, window);
   if (distinct) {
     const seen = new Set<string>();
     ranked = ranked.filter((h) => {
@@ -183,16 +195,17 @@ export function runSearch(index: SearchIndex, params: SearchParams): SearchResul
     });
   }
   if (typeof threshold === "number") ranked = ranked.filter((h) => scoreOf(h) >= threshold);
-  const matched = needAll ? ranked : hits;
+  // What the total and the facets count: every hit, or those distinct and the threshold kept.
+  const matchedCount = needAll ? ranked.length : (placeholder?.length ?? hits.length);
 
   let facets: FacetResult | null = null;
   if (params.facets) {
-    const docs = matched.map((h) => h.doc);
-    const wanted = resolveFacets(index.uid, settings, params.facets, params.facets.includes("*") ? docs : []);
-    facets = computeFacets(settings, wanted, docs, params.facets.includes("*"));
+    const matchedSlots = needAll ? hitSlots(ranked) : (placeholder ?? hitSlots(hits));
+    const wanted = resolveFacets(index.uid, settings, params.facets, params.facets.includes("*") ? index.columns.fieldPaths(matchedSlots) : []);
+    facets = countFacets(settings, wanted, matchedSlots, index.columns, params.facets.includes("*"));
   }
 
-  const total = Math.min(matched.length, maxTotalHits);
+  const total = Math.min(matchedCount, maxTotalHits);
   const pageHits = ranked.slice(Math.min(offset, maxTotalHits), Math.min(offset + limit, maxTotalHits));
 
   const matcher = hasQuery ? wordMatcher(plan) : null;

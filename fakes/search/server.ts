@@ -62,9 +62,11 @@ export async function startSearchFake(opts: SearchFakeOptions): Promise<SearchFa
   const engine = new Engine();
   for (const index of await store.loadIndexes()) engine.indexes.set(index.uid, index);
 
-  // Full-text indexes are (re)built in the background whenever writes settle.
+  // Full-text indexes, then filter and facet columns, are (re)built in the background whenever writes settle.
   const warmAll = () => {
-    for (const index of engine.indexes.values()) index.text.warm().catch((err: unknown) => console.error("search fake: indexing failed", err));
+    for (const index of engine.indexes.values()) {
+      index.warm().catch((err: unknown) => console.error("search fake: indexing failed", err));
+    }
   };
 
   // Task history is rewritten at most every 50 ms; index files are written by the queue itself.
@@ -138,7 +140,7 @@ export async function startSearchFake(opts: SearchFakeOptions): Promise<SearchFa
         await queue.idle();
         if (tasksTimer) clearTimeout(tasksTimer), (tasksTimer = null);
         await saveTasks();
-        for (const index of engine.indexes.values()) index.text.cancel();
+        for (const index of engine.indexes.values()) index.text.cancel(), index.columns.cancel();
         server.closeAllConnections();
         await closed;
       })();

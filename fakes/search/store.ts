@@ -90,13 +90,19 @@ export class Store {
     const state = this.files.get(index.uid);
     if (!state || index.unsavedAll) return this.writeSnapshot(index);
     const g = state.gen;
+    const room = Math.max(MIN_JOURNAL, state.snapshotBytes / 2) - state.journalBytes;
     const lines = [JSON.stringify({ g, t: "meta", meta: index.meta(), settings: index.settings })];
+    let size = lines[0]!.length + 1;
     for (const id of index.unsaved) {
       const doc = index.docs.get(id);
-      lines.push(JSON.stringify(doc ? { g, t: "put", doc } : { g, t: "del", id }));
+      const line = JSON.stringify(doc ? { g, t: "put", doc } : { g, t: "del", id });
+      lines.push(line);
+      size += line.length + 1;
+      // A big batch goes to a new snapshot: no need to serialise the rest of it twice.
+      if (size > room) return this.writeSnapshot(index);
     }
+    if (size > room) return this.writeSnapshot(index);
     const text = `${lines.join("\n")}\n`;
-    if (state.journalBytes + text.length > Math.max(MIN_JOURNAL, state.snapshotBytes / 2)) return this.writeSnapshot(index);
     await appendFile(this.file(index.uid, "log"), text);
     state.journalBytes += text.length;
     index.markSaved();

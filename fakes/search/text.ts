@@ -54,8 +54,13 @@ export function wordSpans(text: string): WordSpan[] {
   return spans;
 }
 
+const ASCII_WORD_RE = /[a-z0-9]+/g;
+
 /** Folded tokens of a text; the single tokenizer used for documents and queries. */
 export function tokenize(text: string): string[] {
+  // ASCII text (most of it): words are runs of [A-Za-z0-9] and folding is lowercasing,
+  // so one match over the lowercased text gives the same tokens without a match object per word.
+  if (ASCII_RE.test(text)) return text.toLowerCase().match(ASCII_WORD_RE) ?? [];
   const out: string[] = [];
   for (const m of text.matchAll(WORD_RE)) {
     const term = foldText(m[0]);
