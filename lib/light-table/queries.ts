@@ -1,16 +1,14 @@
 import "server-only";
-import { and, eq, inArray } from "drizzle-orm";
+import { inArray } from "drizzle-orm";
 import { db, type Executor } from "@/db/client";
-import { collections, places, regions, sources } from "@/db/schema";
+import { regions } from "@/db/schema";
 import { authorize, type Actor } from "@/lib/auth/policy";
-import { countryName } from "@/lib/catalogue/countries";
-import { readDating } from "@/lib/dating";
-import { placeLine } from "@/lib/places/format";
+import { dateInWords } from "@/lib/exports/citation";
 import { selectRegionViews } from "@/lib/regions/queries";
 import { observationSentence } from "@/lib/regions/types";
 import type { RegionVisibility } from "@/lib/regions/visibility";
+import { sourceSummaries } from "@/lib/sources/summaries";
 import { attributionInWords } from "@/lib/sources/vocab";
-import { visibleSources } from "@/lib/sources/visibility";
 import type { LightTable, LightTableItem, LightTableSource } from "./types";
 
 /**
@@ -50,43 +48,22 @@ export async function lightTableRegions(actor: Actor | null, ids: number[], opts
   return { items, hidden: ids.length - items.length };
 }
 
-/** The catalogue facts of a caption, for the sources the caller may see. */
+/** The catalogue facts of a caption, for the sources the caller may see (read as exports read them). */
 async function sourceCaptions(tx: Executor, actor: Actor | null, ids: number[]): Promise<Map<number, LightTableSource>> {
-  if (ids.length === 0) return new Map();
-  const rows = await tx
-    .select({
-      id: sources.id,
-      title: sources.title,
-      artist: sources.artist,
-      attributionQualifier: sources.attributionQualifier,
-      datingEdtf: sources.datingEdtf,
-      accessionNumber: sources.accessionNumber,
-      placeName: places.name,
-      placeSubdivision: places.subdivisionCode,
-      placeCountry: places.countryCode,
-      collectionName: collections.name,
-      collectionCity: collections.city,
-    })
-    .from(sources)
-    .leftJoin(collections, eq(collections.id, sources.collectionId))
-    .leftJoin(places, eq(places.id, sources.placeId))
-    .where(and(inArray(sources.id, ids), visibleSources(actor)));
+  const summaries = await sourceSummaries(tx, actor, ids);
   return new Map(
-    rows.map((r) => {
-      const reading = r.datingEdtf ? readDating(r.datingEdtf) : null;
-      const caption: LightTableSource = {
-        id: r.id,
-        title: r.title,
-        attribution: attributionInWords(r.attributionQualifier, r.artist),
-        dating: reading?.ok ? reading.words : null,
-        datingEdtf: r.datingEdtf,
-        place: r.placeName
-          ? placeLine({ name: r.placeName, subdivisionCode: r.placeSubdivision, countryCode: r.placeCountry, country: countryName(r.placeCountry) })
-          : null,
-        collection: r.collectionName ? [r.collectionName, r.collectionCity].filter(Boolean).join(", ") : null,
-        accessionNumber: r.accessionNumber,
-      };
-      return [r.id, caption];
-    }),
+    [...summaries.values()].map((s): [number, LightTableSource] => [
+      s.id,
+      {
+        id: s.id,
+        title: s.title,
+        attribution: attributionInWords(s.attributionQualifier, s.artist),
+        dating: dateInWords(s.datingEdtf),
+        datingEdtf: s.datingEdtf,
+        place: s.place,
+        collection: s.collectionName ? [s.collectionName, s.collectionCity].filter(Boolean).join(", ") : null,
+        accessionNumber: s.accessionNumber,
+      },
+    ]),
   );
 }
