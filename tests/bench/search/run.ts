@@ -1,12 +1,12 @@
 // The search part of `npm run bench` (`npm run bench -- search`, only when asked): indexes 100,000
 // invented region documents into a running test stack's search service (start one with
-// docker-free-scripts: use_profile test; start_services; …; start_app — or bash /work/helpers/stack.sh),
-// hits GET /api/search on loopback with autocannon for a few query shapes, and sets each answer's
-// latency beside the search service's own processingTimeMs for the same query (the ratio bounds what the
-// app adds: session, parsing, the visibility filter, labels, JSON; under load it also holds the wait for
-// the single-threaded fake). Then times the decade chart and the place summary over 100,000 results.
-// The bench documents are deleted at the end. Writes tests/bench/results/search.{json,md}.
-// A measurement, not a test: nothing here fails on timing.
+// docker-free-scripts/lib.sh: use_profile test; start_services; run_migrations; …; start_app), hits
+// GET /api/search on loopback with autocannon for a few query shapes, one request at a time and then
+// several at once, and sets each answer's latency beside the search service's own processingTimeMs for
+// the same query: one at a time the ratio is what the app adds (session, parsing, the visibility filter,
+// labels, JSON); several at once it also holds the wait for the single-threaded fake. Then times the
+// decade chart and the place summary over 100,000 results. The bench documents are deleted at the end.
+// Writes tests/bench/results/search.{json,md}. A measurement, not a test: nothing here fails on timing.
 import { writeFileSync } from "node:fs";
 import os from "node:os";
 import autocannon from "autocannon";
@@ -22,6 +22,8 @@ const COUNT = Number(process.env.BENCH_SEARCH_DOCS ?? 100_000);
 // A fixed number of requests per shape, not a duration, so a slow service lengthens the run instead of thinning the sample.
 const REQUESTS = Number(process.env.BENCH_SEARCH_REQUESTS ?? 24);
 const CONNECTIONS = 4;
+// One request at a time as well: then nothing waits at the single-threaded fake, and the ratio is the app's own overhead.
+const ALONE_REQUESTS = Number(process.env.BENCH_SEARCH_ALONE_REQUESTS ?? 12);
 const DIRECT_REPS = Number(process.env.BENCH_SEARCH_DIRECT_REPS ?? 8);
 const SORTS: Record<string, string[]> = { relevance: [], date: ["dateFrom:asc"], date_desc: ["dateTo:desc"], recent: ["updatedAt:desc"] };
 
@@ -33,7 +35,20 @@ const SHAPES = [
 ];
 
 type Env = Record<string, string | undefined>;
-type ShapeResult = { id: string; label: string; query: string; total: number; app: Stats & { requestsPerSecond: number; errors: number; statuses: Record<string, number> }; serviceProcessingMs: Stats; serviceRoundTripMs: Stats; ratioP50: number | null };
+type AppStats = Stats & { requestsPerSecond: number; errors: number; statuses: Record<string, number> };
+type ShapeResult = {
+  id: string;
+  label: string;
+  query: string;
+  total: number;
+  app: AppStats;
+  /** The same requests one at a time. */
+  alone: AppStats;
+  serviceProcessingMs: Stats;
+  serviceRoundTripMs: Stats;
+  ratioP50: number | null;
+  ratioAloneP50: number | null;
+};
 
 async function meili(env: Env, path: string, init: { method?: string; body?: unknown } = {}) {
   const res = await fetch(`${env.MEILI_HOST}${path}`, {
@@ -54,10 +69,10 @@ async function waitTask(env: Env, task: { taskUid?: number }) {
   }
 }
 
-async function underLoad(url: string): Promise<ShapeResult["app"]> {
+async function underLoad(url: string, connections = CONNECTIONS, amount = REQUESTS): Promise<AppStats> {
   const samples: number[] = [];
   const statuses: Record<string, number> = {};
-  const instance = autocannon({ url, connections: CONNECTIONS, amount: REQUESTS, timeout: 300 });
+  const instance = autocannon({ url, connections, amount, timeout: 300 });
   // Every answer's time counts, refusals too (a 503 after the client's 5 s timeout is what a reader waits).
   instance.on("response", (_client: unknown, status: number, _bytes: number, ms: number) => {
     samples.push(ms);
@@ -102,10 +117,13 @@ export async function runSearchBench(env: Env) {
         processing.push(Number(answer.processingTimeMs));
         total = Number(answer.totalHits ?? 0);
       }
-      const load = await underLoad(`${app}/api/search${shape.query ? `?${shape.query}` : ""}`);
+      const url = `${app}/api/search${shape.query ? `?${shape.query}` : ""}`;
+      const alone = await underLoad(url, 1, ALONE_REQUESTS);
+      const load = await underLoad(url);
       const service = stats(processing);
-      shapes.push({ ...shape, total, app: load, serviceProcessingMs: service, serviceRoundTripMs: stats(roundTrip), ratioP50: service.p50 > 0 ? Math.round((load.p50 / service.p50) * 10) / 10 : null });
-      console.log(`  ${shape.id}: app p50 ${load.p50} ms p95 ${load.p95} ms; service ${service.p50} ms`);
+      const ratio = (appMs: number) => (service.p50 > 0 ? Math.round((appMs / service.p50) * 10) / 10 : null);
+      shapes.push({ ...shape, total, app: load, alone, serviceProcessingMs: service, serviceRoundTripMs: stats(roundTrip), ratioP50: ratio(load.p50), ratioAloneP50: ratio(alone.p50) });
+      console.log(`  ${shape.id}: app p50 ${load.p50} ms p95 ${load.p95} ms (one at a time p50 ${alone.p50} ms); service ${service.p50} ms`);
     }
   } finally {
     await waitTask(env, (await meili(env, `/indexes/${uid}/documents/delete`, { body: { filter: `regionId >= ${BENCH_FIRST_ID}` } })) as { taskUid: number });
@@ -127,7 +145,7 @@ export async function runSearchBench(env: Env) {
     machine: { cpus: os.cpus().length, cpu: os.cpus()[0]?.model, node: process.version, loadAverage: { start: round1(loadAtStart), end: round1(os.loadavg()[0]!) } },
     documents: docs.length,
     indexMs,
-    load: { connections: CONNECTIONS, requests: REQUESTS, caller: "visitor (no session)" },
+    load: { connections: CONNECTIONS, requests: REQUESTS, aloneRequests: ALONE_REQUESTS, caller: "visitor (no session)" },
     shapes,
     charts: { hits: hits.length, decadeHistogramMs: stats(histogramMs.slice(2)), placeSummaryMs: stats(placesMs.slice(2)) },
     runMs: Math.round(performance.now() - started),
@@ -139,13 +157,13 @@ export async function runSearchBench(env: Env) {
 
 /** What the figures mean, from what this run saw: the timeout sentence says whether any answer was refused. */
 function note({ documents, shapes, machine }: { documents: number; shapes: ShapeResult[]; machine: { cpus: number } }): string {
-  const answers = shapes.flatMap((s) => Object.entries(s.app.statuses));
+  const answers = shapes.flatMap((s) => [...Object.entries(s.app.statuses), ...Object.entries(s.alone.statuses)]);
   const total = answers.reduce((n, [, count]) => n + count, 0);
   const refused = answers.filter(([status]) => status !== "200").reduce((n, [, count]) => n + count, 0);
   const service = shapes.map((s) => s.serviceProcessingMs.p50);
   return [
     `Read with care: the search service here is the JavaScript fake (fakes/search), one thread. It answers filters and facets from a column per attribute (fakes/search/columns.ts); at ${documents.toLocaleString("en")} documents these shapes took ${Math.min(...service)}–${Math.max(...service)} ms of its processing time (p50), and a real Meilisearch answers them faster still.`,
-    `The app's requests arrive ${CONNECTIONS} at a time and wait for one another at the fake, so app p50 and p95 hold that wait as well as what the app adds (session, parsing, the visibility filter, labels, JSON), with the fake, the app and autocannon sharing ${machine.cpus} cores: the ratio is an upper bound on the app's overhead, not the overhead alone.`,
+    `One at a time, nothing waits at the fake: that ratio is what the app adds (session, parsing, the visibility filter, labels, JSON, the loopback hop). Under load the requests arrive ${CONNECTIONS} at a time and wait for one another at the fake, with the fake, the app and autocannon sharing ${machine.cpus} cores, so that ratio also holds the wait.`,
     refused
       ? `${refused} of ${total} answers were not 200: the app's search client gives up after 5 s (lib/search/client.ts) and answers 503, and those times are that timeout, not the app's work.`
       : `All ${total} answers were 200: none reached the app's 5 s search timeout (lib/search/client.ts).`,
@@ -156,18 +174,21 @@ function note({ documents, shapes, machine }: { documents: number; shapes: Shape
 const round1 = (n: number) => Math.round(n * 10) / 10;
 
 function report(r: { when: string; machine: { cpus: number; cpu?: string; node: string; loadAverage: { start: number; end: number } }; documents: number; indexMs: number; shapes: ShapeResult[]; charts: { hits: number; decadeHistogramMs: Stats; placeSummaryMs: Stats } }): string {
-  const rows = r.shapes.map((s) => `| ${s.label} | ${s.total} | ${s.app.p50} | ${s.app.p95} | ${s.app.requestsPerSecond} | ${Object.entries(s.app.statuses).map(([k, v]) => `${v}× ${k}`).join(", ")} | ${s.serviceProcessingMs.p50} | ${s.serviceRoundTripMs.p50} | ${s.ratioP50 ?? "–"} |`);
+  const rows = r.shapes.map(
+    (s) =>
+      `| ${s.label} | ${s.total} | ${s.serviceProcessingMs.p50} | ${s.serviceRoundTripMs.p50} | ${s.alone.p50} | ${s.alone.p95} | ${s.ratioAloneP50 ?? "–"} | ${s.app.p50} | ${s.app.p95} | ${s.app.requestsPerSecond} | ${s.ratioP50 ?? "–"} | ${Object.entries(s.app.statuses).map(([k, v]) => `${v}× ${k}`).join(", ")} |`,
+  );
   return [
     "# Search bench",
     "",
     `${r.when}, ${r.machine.cpus} CPUs (${r.machine.cpu ?? "?"}), Node ${r.machine.node}, load average ${r.machine.loadAverage.start} at the start and ${r.machine.loadAverage.end} at the end. ${r.documents} region documents indexed into the search fake in ${r.indexMs} ms.`,
-    `GET /api/search as a visitor, ${REQUESTS} requests over ${CONNECTIONS} connections per shape (autocannon, loopback). "Service" is the search service answering the same`,
+    `GET /api/search as a visitor per shape (autocannon, loopback): ${ALONE_REQUESTS} requests one at a time, then ${REQUESTS} over ${CONNECTIONS} connections. "Service" is the search service answering the same`,
     "search directly: its own processingTimeMs and the round trip from this process. Ratio = app p50 / service processingTimeMs p50.",
     "",
     note(r),
     "",
-    "| Query | Hits | App p50 ms | App p95 ms | Req/s | Answers | Service processingTimeMs p50 | Service round trip p50 ms | Ratio |",
-    "|---|---:|---:|---:|---:|---|---:|---:|---:|",
+    `| Query | Hits | Service processingTimeMs p50 | Service round trip p50 ms | App p50 ms, one at a time | App p95 ms, one at a time | Ratio, one at a time | App p50 ms, ${CONNECTIONS} at a time | App p95 ms, ${CONNECTIONS} at a time | Req/s | Ratio, ${CONNECTIONS} at a time | Answers, ${CONNECTIONS} at a time |`,
+    "|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---|",
     ...rows,
     "",
     `Charts over ${r.charts.hits} hits (in process): decade histogram stacked by right-hand technique p50 ${r.charts.decadeHistogramMs.p50} ms (p95 ${r.charts.decadeHistogramMs.p95}); place summary p50 ${r.charts.placeSummaryMs.p50} ms. The search page charts at most 5,000 hits.`,
