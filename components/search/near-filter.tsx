@@ -23,12 +23,20 @@ export function NearFilter({ place, km }: { place: PlaceChoice | null; km: numbe
 
   function apply(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
+    const current = new URLSearchParams(params.toString());
+    // With the place cleared, applying takes the distance filter away, as the chip's × does.
+    if (!chosen && current.has("near")) {
+      const href = withParams(current, { near: null, km: null, ...(current.get("sort") === "distance" ? { sort: null } : {}) });
+      setError(null);
+      startTransition(() => router.push(href, { scroll: false }));
+      return;
+    }
     if (!chosen) {
       setError("Choose a place from the list first.");
       return;
     }
     setError(null);
-    const href = withParams(new URLSearchParams(params.toString()), { near: String(chosen.id), km: distance });
+    const href = withParams(current, { near: String(chosen.id), km: distance });
     startTransition(() => router.push(href, { scroll: false }));
   }
 

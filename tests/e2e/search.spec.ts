@@ -160,6 +160,13 @@ test("a visitor keeps the evidence within a distance of a place, sorts it neares
   }
   await page.screenshot({ path: `${SHOTS}/search-near.png`, fullPage: true });
 
+  // Clearing the place and applying takes the filter away; back again, the chip's × does the same.
+  await page.getByRole("button", { name: "Clear Near the place" }).click();
+  await page.getByRole("button", { name: "Apply distance" }).click();
+  await expect(page).not.toHaveURL(/near=|km=|sort=distance/);
+  await expect(search.nearChip).toHaveCount(0);
+  await page.goBack();
+  await expect(search.nearChip).toHaveText(/Within 250 km of Rome, Italy/);
   await page.getByRole("link", { name: "Remove the filter within 250 km of Rome, Italy" }).click();
   await expect(page).not.toHaveURL(/near=|km=|sort=distance/);
   await expect(search.nearChip).toHaveCount(0);
