@@ -1,4 +1,6 @@
+import { geoCircle, geoPath } from "d3-geo";
 import { formatWeight } from "@/lib/charts/axis";
+import { kmToDegrees } from "@/lib/charts/distance";
 import { ITEMS, count, placeMapSummary, placeName, type Noun } from "@/lib/charts/describe";
 import { PLACE_FILL, SEA_FILL, AXIS_STROKE, choroplethFill } from "@/lib/charts/palette";
 import { choroplethClasses, type PlaceCount, type PlaceSummary } from "@/lib/charts/places";
@@ -26,6 +28,8 @@ export type PlaceMapProps = {
   choropleth?: boolean;
   maxRadius?: number;
   noun?: Noun;
+  /** Where distances are measured from, with the distance's ring (great circle), e.g. a search's `near`. */
+  origin?: { name: string; latitude: number; longitude: number; km: number };
 };
 
 // World map of evidence: countries shaded by count, a circle per place with area ∝ count.
@@ -42,6 +46,7 @@ export function PlaceMap({
   choropleth = true,
   maxRadius = 16,
   noun = ITEMS,
+  origin,
 }: PlaceMapProps) {
   const { width, height } = map.projection;
   const projection = makeProjection(map.projection);
@@ -56,6 +61,9 @@ export function PlaceMap({
   const circles = summary.places
     .map((place) => ({ place, at: projectPoint(projection, place.longitude, place.latitude) }))
     .filter((c): c is { place: PlaceCount; at: [number, number] } => c.at !== null);
+  const originAt = origin ? projectPoint(projection, origin.longitude, origin.latitude) : null;
+  // The ring is the set of points at that distance on the sphere, drawn through the map's own projection.
+  const ring = origin ? geoPath(projection)(geoCircle().center([origin.longitude, origin.latitude]).radius(kmToDegrees(origin.km))()) : null;
 
   return (
     <figure className="m-0">
@@ -100,6 +108,12 @@ export function PlaceMap({
             />
           </ChartMark>
         ))}
+        {origin && originAt && (
+          <g role="img" aria-label={`Within ${origin.km} km of ${origin.name}`} data-testid="map-origin">
+            {ring && <path d={ring} fill="none" strokeDasharray="6 4" strokeWidth={1.5} className="stroke-ink" />}
+            <path d={`M${originAt[0] - 6},${originAt[1]}h12M${originAt[0]},${originAt[1] - 6}v12`} strokeWidth={2.5} className="stroke-ink" />
+          </g>
+        )}
       </svg>
       {choropleth && classes.breaks.length > 0 && (
         <ChartLegend

@@ -18,9 +18,11 @@ type Props = {
   charted: number;
   total: number;
   countryName: (code: string) => string;
+  /** The place a distance filter measures from, marked on the map with its ring. */
+  origin?: { name: string; latitude: number; longitude: number; km: number };
 };
 
-export function SearchCharts({ histogram, places, map, params, stack, stackOptions, charted, total, countryName }: Props) {
+export function SearchCharts({ histogram, places, map, params, stack, stackOptions, charted, total, countryName, origin }: Props) {
   const chosen = stackOptions.find((o) => o.key === stack) ?? null;
   const kept = [...params].filter(([k]) => k !== "stack" && k !== "page");
   return (
@@ -57,6 +59,7 @@ export function SearchCharts({ histogram, places, map, params, stack, stackOptio
         hrefForPlace={(p) => (p.id ? toggleValue(params, "place", String(p.id)) : withParams(params, {}))}
         countryName={countryName}
         noun={{ one: "region", many: "regions" }}
+        origin={origin}
       />
     </section>
   );

@@ -18,7 +18,9 @@ function crop(hit: RegionDocument, size: number): string | null {
 const titleOf = (hit: RegionDocument) => hit.label || hit.terms.slice(0, 3).join(", ") || `Region ${hit.regionId}`;
 const whereWhen = (hit: RegionDocument) => [hit.datingWords ?? hit.dating, hit.place, hit.country].filter(Boolean).join(" · ");
 
-export function ResultGrid({ hits, proposed }: { hits: RegionDocument[]; proposed: boolean }) {
+type Hit = RegionDocument & { distanceKm?: number | null };
+
+export function ResultGrid({ hits, proposed }: { hits: Hit[]; proposed: boolean }) {
   return (
     <ResultKeys>
       <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-4" aria-label="Results (arrow keys move between them)">
@@ -34,6 +36,11 @@ export function ResultGrid({ hits, proposed }: { hits: RegionDocument[]; propose
                 <span className="block font-semibold">{titleOf(hit)}</span>
                 <span className="block text-sm text-ink-soft">{hit.sourceTitle}</span>
                 <span className="block text-xs text-ink-faint">{whereWhen(hit)}</span>
+                {typeof hit.distanceKm === "number" && (
+                  <span className="block text-xs text-ink-faint" data-testid="result-distance">
+                    {formatKm(hit.distanceKm)} away
+                  </span>
+                )}
                 {hit.copy === "working" && <span className="mt-1 inline-block rounded bg-paper-deep px-1 text-xs">{hit.state}, not yet vetted</span>}
               </Link>
               <AddToLightTable regionId={hit.regionId} proposed={proposed} showOpen={false} className="px-2 pb-2" />
@@ -46,7 +53,7 @@ export function ResultGrid({ hits, proposed }: { hits: RegionDocument[]; propose
 }
 
 /** With `showDistance` (a search near a place), a column gives each hit's distance from that place. */
-export function ResultTable({ hits, proposed, showDistance = false }: { hits: (RegionDocument & { distanceKm?: number | null })[]; proposed: boolean; showDistance?: boolean }) {
+export function ResultTable({ hits, proposed, showDistance = false }: { hits: Hit[]; proposed: boolean; showDistance?: boolean }) {
   return (
     <ResultKeys className="overflow-x-auto">
       <table className="w-full text-sm">

@@ -11,6 +11,9 @@ export interface LatLon {
 
 const toRadians = (degrees: number) => (degrees * Math.PI) / 180;
 
+/** A great-circle distance as the angle it spans at the Earth's centre, in degrees (for d3's geoCircle). */
+export const kmToDegrees = (km: number, radiusKm: number = MEAN_EARTH_RADIUS_KM) => (km * 180) / (Math.PI * radiusKm);
+
 /** Kilometres between two points given in decimal degrees (WGS 84 latitude and longitude). */
 export function haversineKm(a: LatLon, b: LatLon, radiusKm: number = MEAN_EARTH_RADIUS_KM): number {
   for (const p of [a, b]) {

@@ -145,9 +145,13 @@ test("a visitor keeps the evidence within a distance of a place, sorts it neares
   await expect(search.nearChip).toHaveText(/Within 250 km of Rome, Italy/);
   await search.expectRegions([naples, plucked]);
   await expect(page.getByTestId("live-count")).toContainText("2 matches");
+  // The map marks where the distance is measured from, with its ring.
+  await expect(page.getByRole("img", { name: "Within 250 km of Rome, Italy" })).toBeVisible();
 
   await page.getByRole("link", { name: "Distance, nearest first" }).click();
   await expect(page).toHaveURL(/sort=distance/);
+  // The grid says each one's distance too.
+  await expect(page.getByTestId("result-distance")).toHaveText([/^1[89]\d km away$/, /^1[89]\d km away$/]);
   await page.getByRole("link", { name: "Table", exact: true }).click();
   await expect(page).toHaveURL(/view=table/);
   await search.expectRegions([naples, plucked]);

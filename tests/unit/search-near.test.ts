@@ -7,9 +7,11 @@
 //   radius 6371.0 km (2887.2600 km with 6372.8 km).
 // - One degree of latitude along a meridian is πR/180 = 111.1949 km for R = 6371.0 km (common practice:
 //   "a degree of latitude is about 111 km").
+import { geoCircle } from "d3-geo";
 import { describe, expect, it } from "vitest";
 import { matchesFilter, parseFilter } from "../../fakes/search/filter";
 import { requestFilters } from "@/lib/search/filters";
+import { haversineKm, kmToDegrees } from "@/lib/charts/distance";
 import { formatKm, geoRadiusFilter, geoSort, nearKm, originName, withDistances, type NearOrigin } from "@/lib/search/near";
 import { searchParamsToQuery, searchQuerySchema } from "@/lib/search/schemas";
 
@@ -99,5 +101,19 @@ describe("the distance beside each hit", () => {
     expect(formatKm(0)).toBe("less than 0.1 km");
     expect(originName(bna(1).place)).toBe("Nashville, United States of America");
     expect(originName({ name: "Kingdom of Naples", country: null })).toBe("Kingdom of Naples");
+  });
+});
+
+describe("the ring the map draws around the place", () => {
+  it("spans one degree for 111.1949 km (πR/180, R = 6371.0 km, common practice)", () => {
+    expect(kmToDegrees(111.1949)).toBeCloseTo(1, 5);
+  });
+
+  it("has every point at the filter's distance from the place, by the haversine formula", () => {
+    const rome = { latitude: 41.89, longitude: 12.48 };
+    for (const km of [25, 250, 2000]) {
+      const ring = geoCircle().center([rome.longitude, rome.latitude]).radius(kmToDegrees(km))();
+      for (const [longitude, latitude] of ring.coordinates[0]) expect(haversineKm(rome, { latitude, longitude })).toBeCloseTo(km, 6);
+    }
   });
 });

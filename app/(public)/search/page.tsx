@@ -17,7 +17,7 @@ import { boxAround } from "@/lib/charts/projection";
 import { worldMap } from "@/lib/charts/world-map";
 import { ValidationError } from "@/lib/errors";
 import type { RegionDocument } from "@/lib/search/documents";
-import { nearKm } from "@/lib/search/near";
+import { nearKm, originName } from "@/lib/search/near";
 import { CHART_LIMIT, searchHistogram, searchPlaces } from "@/lib/search/page/charts";
 import { facetGroups } from "@/lib/search/page/facets";
 import { exportHref, toUrlParams, withParams, type RawParams } from "@/lib/search/page/url";
@@ -138,6 +138,7 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
               charted={chartHits.hits.length}
               total={answer.total}
               countryName={name}
+              origin={near ? { name: originName(near.place), latitude: near.place.latitude, longitude: near.place.longitude, km: near.km } : undefined}
             />
           )}
         </div>
