@@ -17,22 +17,14 @@
 // numbers observed for a count aspect; `decade` and `century` list every decade (1640 = 1640–1649)
 // and century (1600 = 1600–1699) the widened dating overlaps; `dateFrom` / `dateTo` are the widened
 // bounds as YYYYMMDD numbers (absent when open), so a date overlap is two numeric comparisons.
-import type { AspectKind } from "@/db/schema/vocabulary";
-import type { Confidence, RegionState } from "@/db/schema/regions";
+import type { RegionState } from "@/db/schema/regions";
+import type { ObservationView } from "@/lib/regions/types";
 
 /** A decade or century list longer than this says nothing useful for faceting; it is left empty. */
 export const MAX_DECADES = 100;
 
-export type ObservationFacts = {
-  aspectKey: string;
-  kind: AspectKind;
-  termKey: string | null;
-  termLabel: string | null;
-  count: number | null;
-  text: string | null;
-  confidence: Confidence;
-  note: string | null;
-};
+/** What a document needs of an observation: the region view's fields without the ids and labels it shows. */
+export type ObservationFacts = Pick<ObservationView, "aspectKey" | "kind" | "termKey" | "termLabel" | "count" | "text" | "confidence" | "note">;
 
 export type VersionFacts = {
   id: number;

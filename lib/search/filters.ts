@@ -1,7 +1,6 @@
 // The caller's own search filters as Meilisearch filter expressions (pure). Keys and values were
 // checked by searchQuerySchema, so they can be quoted as they are.
-import { overlapQueryDays } from "@/lib/dating";
-import { ValidationError } from "@/lib/errors";
+import { requestedDateRange } from "@/lib/catalogue/date-range";
 import { dayNumber } from "./documents";
 import { geoRadiusFilter, type NearOrigin } from "./near";
 import type { SearchQuery } from "./schemas";
@@ -33,12 +32,7 @@ export function requestFilters(q: SearchQuery, near: NearOrigin | null = null): 
     out.push(geoRadiusFilter(near));
   }
   if (q.from || q.to) {
-    let days: { fromDay: string | null; toDay: string | null };
-    try {
-      days = overlapQueryDays({ from: q.from ?? null, to: q.to ?? null });
-    } catch (error) {
-      throw new ValidationError(error instanceof Error ? error.message : "The date range is not valid.", { from: ["Check the date range."] });
-    }
+    const days = requestedDateRange(q);
     // As in the source list: undated sources never match a date range; an open end matches its side.
     out.push("dated = true");
     if (days.toDay) out.push(`(dateFrom NOT EXISTS OR dateFrom <= ${dayNumber(days.toDay)})`);

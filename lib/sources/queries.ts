@@ -7,8 +7,9 @@ import { changedFields } from "@/lib/audit/diff";
 import { authorize, type Actor } from "@/lib/auth/policy";
 import { escapeLike } from "@/lib/db-like";
 import { suggestionColumns } from "@/lib/places/queries";
-import { overlapQueryDays, readDating } from "@/lib/dating";
-import { NotFoundError, ValidationError } from "@/lib/errors";
+import { requestedDateRange } from "@/lib/catalogue/date-range";
+import { readDating } from "@/lib/dating";
+import { NotFoundError } from "@/lib/errors";
 import { afterCursor, decodeCursor, encodeCursor } from "./keyset";
 import type { SourceListQuery } from "./schemas";
 import { canSeeSource, visibleSources } from "./visibility";
@@ -38,12 +39,7 @@ function filters(actor: Actor | null, q: SourceListQuery): SQL[] {
   if (q.creator) where.push(eq(sources.createdBy, q.creator));
   if (q.state) where.push(eq(sources.state, q.state));
   if (q.from || q.to) {
-    let days: { fromDay: string | null; toDay: string | null };
-    try {
-      days = overlapQueryDays({ from: q.from ?? null, to: q.to ?? null });
-    } catch (error) {
-      throw new ValidationError(error instanceof Error ? error.message : "The date range is not valid.", { from: ["Check the date range."] });
-    }
+    const days = requestedDateRange(q);
     // Undated sources never match a date filter; open ends match everything on their open side.
     where.push(isNotNull(sources.datingEdtf));
     if (days.toDay) where.push(or(isNull(sources.datingSearchEarliest), lte(sources.datingSearchEarliest, days.toDay))!);
